@@ -1,0 +1,18 @@
+/**
+ * @tallus/contracts: the zod schemas and types of every API request and
+ * response, the problem body, error codes and roles. Sole entry point.
+ */
+
+// Roles and their ranking
+export * from './roles';
+
+// Errors
+export * from './error-codes';
+export * from './problem';
+
+// Features
+export * from './auth';
+export * from './teams';
+export * from './invitations';
+export * from './outbox';
+export * from './health';
