@@ -1,0 +1,64 @@
+import { Routes } from '@angular/router';
+
+import { signedInGuard, signedOutGuard } from './core/auth-guard';
+import { teamGuard } from './teams/team-guard';
+import { preferredTeamGuard } from './teams/welcome/preferred-team-guard';
+
+/** Every screen of Tallus. Team sections live under `/teams/:teamId/`. */
+export const routes: Routes = [
+  {
+    path: 'sign-in',
+    canMatch: [signedOutGuard],
+    title: 'Sign in · Tallus',
+    loadComponent: () => import('./auth/sign-in/sign-in').then((m) => m.SignIn),
+  },
+  {
+    path: 'register',
+    canMatch: [signedOutGuard],
+    title: 'Create account · Tallus',
+    loadComponent: () => import('./auth/register/register').then((m) => m.Register),
+  },
+  {
+    path: '',
+    canMatch: [signedInGuard],
+    loadComponent: () => import('./core/shell/shell').then((m) => m.Shell),
+    children: [
+      {
+        path: '',
+        pathMatch: 'full',
+        title: 'Tallus',
+        canActivate: [preferredTeamGuard],
+        loadComponent: () => import('./teams/welcome/welcome').then((m) => m.Welcome),
+      },
+      {
+        path: 'teams/:teamId',
+        canActivate: [teamGuard],
+        children: [
+          {
+            path: '',
+            pathMatch: 'full',
+            title: 'Team · Tallus',
+            loadComponent: () => import('./teams/team-home/team-home').then((m) => m.TeamHome),
+          },
+          {
+            path: 'members',
+            title: 'Members · Tallus',
+            loadComponent: () => import('./teams/members/members').then((m) => m.Members),
+          },
+        ],
+      },
+      {
+        path: 'invitations/accept',
+        title: 'Accept invitation · Tallus',
+        loadComponent: () =>
+          import('./auth/accept-invitation/accept-invitation').then((m) => m.AcceptInvitation),
+      },
+      {
+        path: 'dev/outbox',
+        title: 'Outbox · Tallus',
+        loadComponent: () => import('./dev/outbox/outbox').then((m) => m.Outbox),
+      },
+    ],
+  },
+  { path: '**', redirectTo: '' },
+];

@@ -1,0 +1,78 @@
+import { ValidationErrors } from '@angular/forms';
+
+import type { Problem, ProblemIssue } from '@tallus/contracts';
+
+/**
+ * Screen texts for error codes, in one place. Problems from the API bring their own
+ * English `detail`; these texts replace it where the screen can say more about what to do.
+ */
+const messagesByCode: Readonly<Record<string, string>> = {
+  NETWORK: 'Tallus could not reach its server. Check your connection and try again.',
+  UNKNOWN: 'Something unexpected went wrong. Try again in a moment.',
+  AUTH_INVALID_CREDENTIALS: 'E-mail or password is wrong.',
+  AUTH_RATE_LIMITED: 'Too many attempts. Wait a few minutes, then try again.',
+  AUTH_EMAIL_TAKEN: 'An account with this e-mail exists already. Sign in instead.',
+  TEAM_LAST_OWNER: 'A team needs at least one owner. Make another member owner first.',
+  TEAM_ROLE_REQUIRED: 'Your role in this team does not allow this. Ask one of the team’s owners.',
+  INVITATION_NOT_FOUND: 'This invitation does not exist. Ask the team’s owner to send a new one.',
+  INVITATION_USED: 'This invitation was accepted already. Open the team from the team switcher.',
+  INVITATION_EXPIRED: 'This invitation has expired. Ask the team’s owner to send a new one.',
+  INVITATION_WRONG_USER:
+    'This invitation was sent to another e-mail address. Sign in with that address to accept it.',
+  INVITATION_ALREADY_MEMBER: 'This person is a member of the team already.',
+};
+
+/** Texts for the client-side validators of reactive forms, keyed by validator error key. */
+const messagesByValidator: Readonly<Record<string, (details: unknown) => string>> = {
+  required: () => 'Required.',
+  email: () => 'Enter an e-mail address such as name@example.org.',
+  minlength: (details) => `Use at least ${requiredLength(details)} characters.`,
+  maxlength: (details) => `Use at most ${requiredLength(details)} characters.`,
+  whitespace: () => 'Must contain more than spaces.',
+};
+
+/**
+ * The text to show for a whole problem (snackbar or form banner): the code's own
+ * text where one exists, otherwise the API's detail.
+ *
+ * @param problem the parsed problem body
+ */
+export function describeProblem(problem: Problem): string {
+  return messagesByCode[problem.code] ?? (problem.detail || problem.title);
+}
+
+/**
+ * The text to show for one field issue from the API.
+ *
+ * @param issue one entry of `problem.issues`
+ */
+export function describeIssue(issue: ProblemIssue): string {
+  return messagesByCode[issue.code] ?? issue.message;
+}
+
+/**
+ * The text of the first error of a form control, for its `mat-error`.
+ * A `server` error carries the API's text as is.
+ *
+ * @param errors `control.errors`
+ */
+export function describeValidationErrors(errors: ValidationErrors | null): string {
+  if (!errors) {
+    return '';
+  }
+  const [key, details] = Object.entries(errors)[0] ?? [];
+  if (key === undefined) {
+    return '';
+  }
+  if (key === 'server' && typeof details === 'string') {
+    return details;
+  }
+  return messagesByValidator[key]?.(details) ?? 'Check this value.';
+}
+
+function requiredLength(details: unknown): number | string {
+  if (typeof details === 'object' && details !== null && 'requiredLength' in details) {
+    return String(details.requiredLength);
+  }
+  return '';
+}

@@ -1,0 +1,26 @@
+import type { Role } from '@tallus/contracts';
+
+/** How a role appears on screen: a word, an icon beside it, and what it allows. */
+export interface RoleView {
+  role: Role;
+  label: string;
+  icon: string;
+  rights: string;
+}
+
+/** Every role, from most to least rights. */
+export const ROLE_VIEWS: readonly RoleView[] = [
+  { role: 'owner', label: 'Owner', icon: 'shield_person', rights: 'manages members, invitations and publishing' },
+  { role: 'reviewer', label: 'Reviewer', icon: 'rate_review', rights: 'writes drafts, vets and returns reaction sets' },
+  { role: 'editor', label: 'Editor', icon: 'edit_note', rights: 'writes drafts' },
+  { role: 'viewer', label: 'Viewer', icon: 'visibility', rights: 'reads' },
+];
+
+/**
+ * The screen view of one role.
+ *
+ * @param role a role from the API
+ */
+export function roleView(role: Role): RoleView {
+  return ROLE_VIEWS.find((view) => view.role === role) ?? ROLE_VIEWS[ROLE_VIEWS.length - 1];
+}

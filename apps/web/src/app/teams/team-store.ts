@@ -1,0 +1,103 @@
+import { Injectable, computed, effect, inject, signal } from '@angular/core';
+import { Observable, of, tap } from 'rxjs';
+
+import { AuthStore } from '../auth/auth-store';
+import type { TeamSummary } from '@tallus/contracts';
+import { TeamsApi } from './teams-api';
+
+/** Key of the last team the user worked in, so the start page can return to it. */
+const LAST_TEAM_STORAGE_KEY = 'tallus.lastTeam';
+
+/** The user's teams and the current one (which the route `/teams/:teamId/...` chooses). */
+@Injectable({ providedIn: 'root' })
+export class TeamStore {
+  private readonly api = inject(TeamsApi);
+
+  private readonly teamsState = signal<TeamSummary[] | null>(null);
+  private readonly currentTeamIdState = signal<string | null>(null);
+
+  /** The user's teams, sorted by name; null until loaded. */
+  readonly teams = this.teamsState.asReadonly();
+  /** Id of the team the user works in now. */
+  readonly currentTeamId = this.currentTeamIdState.asReadonly();
+  /** The team the user works in now, once teams are loaded. */
+  readonly currentTeam = computed(
+    () => this.teamsState()?.find((team) => team.id === this.currentTeamIdState()) ?? null,
+  );
+  /** Whether the user owns the current team (manages members and invitations). */
+  readonly isOwner = computed(() => this.currentTeam()?.role === 'owner');
+
+  constructor() {
+    // Teams belong to a session: when the token changes (sign-out, another user), forget them.
+    const authStore = inject(AuthStore);
+    let sessionToken = authStore.token();
+    effect(() => {
+      const token = authStore.token();
+      if (token !== sessionToken) {
+        sessionToken = token;
+        this.reset();
+      }
+    });
+  }
+
+  /** Loads the user's teams from the API. */
+  load(): Observable<TeamSummary[]> {
+    return this.api.listTeams().pipe(tap((teams) => this.teamsState.set(sortByName(teams))));
+  }
+
+  /** The teams, loading them only when not loaded yet. */
+  ensureLoaded(): Observable<TeamSummary[]> {
+    const teams = this.teamsState();
+    return teams === null ? this.load() : of(teams);
+  }
+
+  /**
+   * Creates a team, of which the user becomes owner, and adds it to the list.
+   *
+   * @param name the team's name
+   */
+  create(name: string): Observable<TeamSummary> {
+    return this.api.createTeam(name).pipe(
+      tap((team) => this.teamsState.update((teams) => sortByName([...(teams ?? []), team]))),
+    );
+  }
+
+  /**
+   * Makes a team the current one and remembers it for the next visit.
+   *
+   * @param teamId a team of `teams()`
+   */
+  select(teamId: string): void {
+    this.currentTeamIdState.set(teamId);
+    try {
+      localStorage.setItem(LAST_TEAM_STORAGE_KEY, teamId);
+    } catch {
+      // Storage disabled: the start page then opens the first team instead.
+    }
+  }
+
+  /** The team to open on the start page: the last one used, else the first. */
+  preferredTeam(): TeamSummary | null {
+    const teams = this.teamsState() ?? [];
+    const lastId = readLastTeamId();
+    return teams.find((team) => team.id === lastId) ?? teams[0] ?? null;
+  }
+
+  /** Forgets everything (on sign-out: the next user has other teams). */
+  reset(): void {
+    this.teamsState.set(null);
+    this.currentTeamIdState.set(null);
+  }
+}
+
+function sortByName(teams: TeamSummary[]): TeamSummary[] {
+  return [...teams].sort((a, b) => a.name.localeCompare(b.name));
+}
+
+function readLastTeamId(): string | null {
+  try {
+    return localStorage.getItem(LAST_TEAM_STORAGE_KEY);
+  } catch {
+    return null;
+  }
+}
