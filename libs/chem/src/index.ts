@@ -1,0 +1,73 @@
+/**
+ * @tallus/chem: the exact chemistry engine of Tallus. Pure TypeScript, no I/O.
+ * The only entry point of the library; see libs/chem/README.md for the API with examples.
+ */
+
+// Exact numbers
+export { Rational, gcdBig, lcmBig } from './rational/rational';
+
+// Errors and warnings
+export { ChemError, CHEM_ERROR_CODES, isChemError, spanAt } from './errors/chem-error';
+export type { ChemErrorCode, ChemErrorDetails, ChemIssue, Span } from './errors/chem-error';
+export { CHEM_WARNING_CODES } from './errors/chem-warning';
+export type { ChemWarning, ChemWarningCode } from './errors/chem-warning';
+
+// Elements
+export { findElement, listElements } from './elements/atomic-weights';
+export type { ElementData } from './elements/atomic-weights';
+
+// Formulas
+export { parseFormula } from './formula/parse-formula';
+export { formatFormula, formulaParts } from './formula/format-formula';
+export type { FormulaPart } from './formula/format-formula';
+export { isSameSpecies, phasedSpeciesKey, speciesKey } from './formula/species-key';
+export { PHASES } from './formula/formula';
+export type { ElementNode, Formula, FormulaNode, FormulaUnit, GroupNode, Phase } from './formula/formula';
+
+// Equations
+export { parseEquation } from './equation/parse-equation';
+export { formatEquation } from './equation/format-equation';
+export type { FormattableTerm } from './equation/format-equation';
+export type { Equation, EquationTerm, Side } from './equation/equation';
+
+// Balancing
+export { balanceEquation } from './balance/balance-equation';
+export type { BalancedTerm, BalanceOptions, BalanceResult, BalanceStatus } from './balance/balance-result';
+export { integerNullSpace, matrixRank, reduceRows } from './balance/null-space';
+export type { RowEchelon } from './balance/null-space';
+export { buildSpeciesMatrix, CHARGE_ROW } from './balance/species-matrix';
+export type { SpeciesMatrix } from './balance/species-matrix';
+
+// Checking, oxidation states and budgets
+export { checkEquation } from './check/check-equation';
+export type { CheckOptions, CheckResult } from './check/check-equation';
+export { assignOxidationStates } from './oxidation/oxidation-states';
+export type { OxidationStates } from './oxidation/oxidation-states';
+export { electronBudget, oxidationStateLookup } from './oxidation/electron-budget';
+export type { BudgetTerm, ElectronBudget, OxidationStateMap } from './oxidation/electron-budget';
+export { protonBudget } from './budget/proton-budget';
+export type { ProtonBudget, ProtonBudgetOptions } from './budget/proton-budget';
+
+// Net reactions
+export { combineReactions } from './combine/combine-reactions';
+export type {
+  CombinedTerm,
+  CombineInput,
+  CombineReaction,
+  CombineResult,
+  CombineStatus,
+} from './combine/combine-reactions';
+
+// Conversions
+export {
+  caco3KgPerTonne,
+  massFractions,
+  molarMass,
+  molarMassExact,
+  molesPerKg,
+  tonnesCo2PerTonne,
+} from './convert/molar-mass';
+
+// JSON forms for the API and the command line
+export { balanceToJson, checkToJson, combineToJson, massToJson } from './json/to-json';
+export type { BalanceJson, CheckJson, CombineJson, MassJson } from './json/to-json';
