@@ -43,6 +43,8 @@ export const API_ERROR_CODES = [
   'NOT_FOUND',
   /** A concurrent or duplicate write was refused (409). */
   'CONFLICT',
+  /** The database does not answer; `GET /api/health` says so (503). */
+  'DATABASE_UNAVAILABLE',
   /** The server failed; the body carries a request id for the logs (500). */
   'INTERNAL_ERROR',
   /** Client only: the request never got an answer. */

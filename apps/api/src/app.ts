@@ -1,0 +1,76 @@
+import { randomUUID } from 'node:crypto';
+import { RequestContext } from '@mikro-orm/core';
+import type { MikroORM } from '@mikro-orm/postgresql';
+import express, { type Express } from 'express';
+import type { Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import { authRoutes } from './auth/routes';
+import { requireUser } from './auth/require-user';
+import type { Config } from './config/env';
+import { devRoutes, type OutboxSource } from './dev/routes';
+import { NotFoundError } from './errors/app-errors';
+import { healthRoutes } from './health/routes';
+import { errorHandler } from './http/error-handler';
+import { securityHeaders } from './http/security-headers';
+import { serveClient } from './http/serve-client';
+import { acceptInvitationRoutes, teamInvitationRoutes } from './invitations/routes';
+import type { Mailer } from './mail/mailer';
+import { teamRoutes } from './teams/routes';
+
+/** Everything the app needs from outside; main.ts and the tests build these. */
+export interface AppDependencies {
+  config: Config;
+  orm: MikroORM;
+  mailer: Mailer;
+  logger: Logger;
+  /** The fake SMTP server's messages; `/api/dev/outbox` exists only with one and outside production. */
+  outbox?: OutboxSource;
+}
+
+/**
+ * Builds the Express app: security headers, request logs, JSON bodies, a
+ * MikroORM context per request, the API under `/api`, problem bodies for
+ * errors, and the built client (when `config.webDist` holds one). Never listens.
+ */
+export function createApp(deps: AppDependencies): Express {
+  const { config, orm, mailer, logger } = deps;
+  const em = orm.em;
+  const authenticated = requireUser(em, config.jwt.secret);
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(securityHeaders());
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (_req, res) => {
+        const id = randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      // Answered requests (4xx included) are routine: logged at debug so the console stays quiet at the default level.
+      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : 'debug'),
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+  app.use((_req, _res, next) => RequestContext.create(orm.em, next));
+
+  const api = express.Router();
+  api.use('/health', healthRoutes(em));
+  api.use('/auth', authRoutes({ em, config, requireUser: authenticated }));
+  api.use('/teams/:teamId/invitations', teamInvitationRoutes({ em, mailer, requireUser: authenticated, publicOrigin: config.publicOrigin }));
+  api.use('/teams', teamRoutes({ em, requireUser: authenticated }));
+  api.use('/invitations', acceptInvitationRoutes({ em, requireUser: authenticated }));
+  if (deps.outbox && config.nodeEnv !== 'production') api.use('/dev', devRoutes(deps.outbox, authenticated));
+  api.use(() => {
+    throw new NotFoundError('NOT_FOUND', 'No such API route.');
+  });
+  app.use('/api', api);
+
+  const client = serveClient(config.webDist);
+  if (client) app.use(client);
+  app.use(() => {
+    throw new NotFoundError('NOT_FOUND', 'Nothing here.');
+  });
+  app.use(errorHandler);
+  return app;
+}

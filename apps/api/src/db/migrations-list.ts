@@ -1,0 +1,12 @@
+import type { MigrationObject } from '@mikro-orm/core';
+import { Migration20261201222709 } from './migrations/Migration20261201222709';
+
+/**
+ * Every migration, in order. The CLI writes new files into ./migrations
+ * (`npm run -w apps/api db:migration:create`); add each one here, so the
+ * bundle and tsx both run exactly this list.
+ */
+export const MIGRATIONS: MigrationObject[] = [
+  // Accounts, teams, memberships, invitations, revoked session tokens.
+  { name: 'Migration20261201222709', class: Migration20261201222709 },
+];

@@ -1,0 +1,37 @@
+import type { ApiErrorCode } from '@tallus/contracts';
+
+/**
+ * Base of the errors that use cases throw for expected failures. Each carries
+ * a code from the contracts and an English detail; which HTTP status it becomes
+ * is decided in one place, `http/to-problem.ts`.
+ */
+export abstract class AppError extends Error {
+  constructor(
+    readonly code: ApiErrorCode,
+    detail: string,
+  ) {
+    super(detail);
+    this.name = new.target.name;
+  }
+}
+
+/** The thing asked for does not exist, or the caller may not know that it does (404). */
+export class NotFoundError extends AppError {}
+
+/** No valid session: no token, or a bad one, or wrong credentials (401). */
+export class AuthenticationError extends AppError {}
+
+/** The caller is known but lacks the right (403). */
+export class ForbiddenError extends AppError {}
+
+/** The request clashes with the current state (409). */
+export class ConflictError extends AppError {}
+
+/** The thing existed but is no longer usable, e.g. an expired invitation (410). */
+export class GoneError extends AppError {}
+
+/** Too many attempts in the current window (429). */
+export class RateLimitedError extends AppError {}
+
+/** A dependency such as the database does not answer (503). */
+export class ServiceUnavailableError extends AppError {}

@@ -1,0 +1,39 @@
+import type { Response } from 'express';
+import type { SessionClaims } from '../auth/session-token';
+import type { Membership } from '../teams/membership.entity';
+import type { User } from '../users/user.entity';
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    /** What the auth and team middleware leave for the route handlers. */
+    interface Locals {
+      /** The signed-in user, set by `requireUser`. */
+      user?: User;
+      /** The claims of the caller's token, set by `requireUser`. */
+      session?: SessionClaims;
+      /** The caller's membership of `:teamId`, set by `requireTeamRole`. */
+      membership?: Membership;
+    }
+  }
+}
+
+/**
+ * The signed-in user of a route behind `requireUser`.
+ *
+ * @throws Error when the route forgot `requireUser` (a bug, so a 500)
+ */
+export function currentUser(res: Response): User {
+  if (!res.locals.user) throw new Error('currentUser() called on a route without requireUser');
+  return res.locals.user;
+}
+
+/**
+ * The caller's membership of the route's team, behind `requireTeamRole`.
+ *
+ * @throws Error when the route forgot `requireTeamRole` (a bug, so a 500)
+ */
+export function currentMembership(res: Response): Membership {
+  if (!res.locals.membership) throw new Error('currentMembership() called on a route without requireTeamRole');
+  return res.locals.membership;
+}

@@ -1,0 +1,32 @@
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import express, { Router } from 'express';
+
+/**
+ * Serves the built client from `folder`: static files, and `index.html` for
+ * every other GET outside `/api` (the client's router takes over there).
+ * Hashed bundles are cached for a year; index.html is never cached.
+ *
+ * @param folder the client build's `browser` folder
+ * @returns the router, or undefined when the folder has no index.html
+ */
+export function serveClient(folder: string): Router | undefined {
+  const root = resolve(folder);
+  const indexFile = resolve(root, 'index.html');
+  if (!existsSync(indexFile)) return undefined;
+  const router = Router();
+  router.use(
+    express.static(root, {
+      index: false,
+      setHeaders: (res, path) => {
+        res.setHeader('Cache-Control', /[.-][0-9A-Z]{8,}\.(js|css|woff2?)$/.test(path) ? 'public, max-age=31536000, immutable' : 'no-cache');
+      },
+    }),
+  );
+  router.get('/{*splat}', (req, res, next) => {
+    if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexFile);
+  });
+  return router;
+}

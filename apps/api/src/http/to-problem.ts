@@ -1,0 +1,68 @@
+import { NotFoundError as OrmNotFoundError, UniqueConstraintViolationException } from '@mikro-orm/core';
+import { problemTypeFor, type ErrorCode, type Problem, type ProblemIssue } from '@tallus/contracts';
+import { ZodError } from 'zod';
+import {
+  AppError,
+  AuthenticationError,
+  ConflictError,
+  ForbiddenError,
+  GoneError,
+  NotFoundError,
+  RateLimitedError,
+  ServiceUnavailableError,
+} from '../errors/app-errors';
+
+/** HTTP status and title of each kind of expected failure. */
+const APP_ERROR_STATUS: ReadonlyArray<[abstract new (...args: never[]) => AppError, number, string]> = [
+  [NotFoundError, 404, 'Not Found'],
+  [AuthenticationError, 401, 'Unauthorized'],
+  [ForbiddenError, 403, 'Forbidden'],
+  [ConflictError, 409, 'Conflict'],
+  [GoneError, 410, 'Gone'],
+  [RateLimitedError, 429, 'Too Many Requests'],
+  [ServiceUnavailableError, 503, 'Service Unavailable'],
+];
+
+/**
+ * Turns anything thrown while handling a request into an RFC 9457 problem body.
+ * Pure: it neither logs nor sends.
+ *
+ * @param error the thrown value
+ * @param requestId id of the request in the logs; only 500 bodies carry it
+ */
+export function toProblem(error: unknown, requestId: string): Problem {
+  if (error instanceof ZodError) {
+    return problem(400, 'Bad Request', 'REQUEST_INVALID', 'The request does not match its schema.', {
+      issues: error.issues.map(toIssue),
+    });
+  }
+  if (isMalformedJson(error)) {
+    return problem(400, 'Bad Request', 'REQUEST_MALFORMED_JSON', 'The request body is not valid JSON.');
+  }
+  if (error instanceof AppError) {
+    const [, status, title] = APP_ERROR_STATUS.find(([type]) => error instanceof type) ?? [AppError, 500, 'Internal Server Error'];
+    return problem(status, title, error.code, error.message);
+  }
+  if (error instanceof OrmNotFoundError) {
+    return problem(404, 'Not Found', 'NOT_FOUND', 'No such resource.');
+  }
+  if (error instanceof UniqueConstraintViolationException) {
+    return problem(409, 'Conflict', 'CONFLICT', 'A record with the same unique values already exists.');
+  }
+  return problem(500, 'Internal Server Error', 'INTERNAL_ERROR', 'The server failed to handle the request; quote the request id when reporting it.', {
+    requestId,
+  });
+}
+
+function problem(status: number, title: string, code: ErrorCode, detail: string, extra: Partial<Problem> = {}): Problem {
+  return { type: problemTypeFor(code), title, status, detail, code, ...extra };
+}
+
+function toIssue(issue: ZodError['issues'][number]): ProblemIssue {
+  return { code: issue.code, message: issue.message, path: issue.path.map((key) => (typeof key === 'symbol' ? String(key) : key)) };
+}
+
+/** Whether express.json() rejected the body as unparseable. */
+function isMalformedJson(error: unknown): boolean {
+  return error instanceof SyntaxError && (error as SyntaxError & { type?: string }).type === 'entity.parse.failed';
+}
