@@ -39,6 +39,8 @@ function orient(vector: readonly bigint[]): Rational[] {
 function impossible(problem: Problem, freedom: number, warnings: ChemWarning[]): BalanceResult {
   const columns = problem.equation.terms.length;
   const isTrivial = integerNullSpace(problem.matrix.rows, columns).length === 0;
+  const elementRows = problem.matrix.rows.slice(0, problem.matrix.labels.length);
+  const matrix = { ...problem.matrix, rows: elementRows };
   return {
     status: 'impossible',
     freedom,
@@ -50,7 +52,7 @@ function impossible(problem: Problem, freedom: number, warnings: ChemWarning[]):
     })),
     equation: null,
     warnings,
-    missing: isTrivial ? findUnbalanceable(problem.matrix, columns) : [],
+    missing: isTrivial ? findUnbalanceable(matrix, columns) : [],
   };
 }
 
@@ -89,6 +91,19 @@ function balancePinned(problem: Problem): BalanceResult {
 }
 
 /**
+ * A pin of zero leaves a species out without fixing the scale, so it becomes a row `x_p = 0`
+ * of the matrix rather than a pin (a zero pin would let the zero vector pass for a balance).
+ */
+function withZeroPinsAsRows(problem: Problem): Problem {
+  const zeros = [...problem.pins].filter(([, value]) => value.isZero()).map(([index]) => index);
+  if (zeros.length === 0) return problem;
+  const columns = problem.equation.terms.length;
+  const rows = zeros.map((index) => Array.from({ length: columns }, (_, column) => (column === index ? 1n : 0n)));
+  const pins = new Map([...problem.pins].filter(([, value]) => !value.isZero()));
+  return { ...problem, pins, matrix: { ...problem.matrix, rows: [...problem.matrix.rows, ...rows] } };
+}
+
+/**
  * Balances a reaction in elements and charge with exact rational arithmetic. Coefficients
  * written in the equation are kept (pinned); the others are solved for. Never throws for bad
  * text: the result then has status `invalid` and an `error` with code and span.
@@ -114,6 +129,7 @@ export function balanceEquation(input: string | Equation, options: BalanceOption
     throw error;
   }
   if (problem.pins.size === problem.equation.terms.length) return checkGiven(problem);
-  if (problem.pins.size === 0) return balanceFree(problem);
-  return balancePinned(problem);
+  const zeroPinned = withZeroPinsAsRows(problem);
+  if (zeroPinned.pins.size === 0) return balanceFree(zeroPinned);
+  return balancePinned(zeroPinned);
 }
