@@ -1,6 +1,6 @@
 import type { Role } from '@tallus/contracts';
 
-/** How a role appears on screen: a word, an icon beside it, and what it allows. */
+/** How a role appears on screen: a word, an icon beside it, and what it allows ("You can …"). */
 export interface RoleView {
   role: Role;
   label: string;
@@ -10,10 +10,10 @@ export interface RoleView {
 
 /** Every role, from most to least rights. */
 export const ROLE_VIEWS: readonly RoleView[] = [
-  { role: 'owner', label: 'Owner', icon: 'shield_person', rights: 'manages members, invitations and publishing' },
-  { role: 'reviewer', label: 'Reviewer', icon: 'rate_review', rights: 'writes drafts, vets and returns reaction sets' },
-  { role: 'editor', label: 'Editor', icon: 'edit_note', rights: 'writes drafts' },
-  { role: 'viewer', label: 'Viewer', icon: 'visibility', rights: 'reads' },
+  { role: 'owner', label: 'Owner', icon: 'shield_person', rights: 'do all a reviewer does, and manage members, invitations and publishing' },
+  { role: 'reviewer', label: 'Reviewer', icon: 'rate_review', rights: 'write drafts, and vet or return reaction sets' },
+  { role: 'editor', label: 'Editor', icon: 'edit_note', rights: 'read the team’s work and write drafts' },
+  { role: 'viewer', label: 'Viewer', icon: 'visibility', rights: 'read the team’s work' },
 ];
 
 /**
