@@ -91,8 +91,8 @@ describe('Members', () => {
     await fixture.whenStable();
 
     const alert = (fixture.nativeElement as HTMLElement).querySelector('[role="alert"]');
+    expect(alert?.textContent).toContain('Ana Owner stays owner.');
     expect(alert?.textContent).toContain('A team needs at least one owner');
-    expect(alert?.textContent).toContain('Ana Owner is the last owner of Kestrel Flats.');
     expect(await select.getValueText()).toContain('Owner');
   });
 

@@ -21,10 +21,12 @@ import { ROLE_VIEWS, roleView } from '../roles';
 import { TeamStore } from '../team-store';
 import { MembersStore } from './members-store';
 
-/** A problem with a member action, shown above the table until dismissed. */
+/** A refused member action, shown above the table until dismissed. */
 interface ActionError {
+  /** What did not happen, e.g. "Ana Owner stays owner." */
+  outcome: string;
+  /** Why, and what to do instead. */
   message: string;
-  detail: string | null;
 }
 
 /**
@@ -110,7 +112,7 @@ export class Members {
       error: (error: unknown) => {
         // The select already shows the refused role: put the member's real one back.
         change.source.value = member.role;
-        this.showActionError(toProblem(error));
+        this.showActionError(`${member.displayName} stays ${roleView(member.role).label.toLowerCase()}.`, toProblem(error));
       },
     });
   }
@@ -142,12 +144,15 @@ export class Members {
           this.teamStore.load().subscribe(() => void this.router.navigate(['/']));
         }
       },
-      error: (error: unknown) => this.showActionError(toProblem(error)),
+      error: (error: unknown) =>
+        this.showActionError(
+          isSelf ? 'You are still a member.' : `${member.displayName} was not removed.`,
+          toProblem(error),
+        ),
     });
   }
 
-  private showActionError(problem: Problem): void {
-    const message = describeProblem(problem);
-    this.actionError.set({ message, detail: problem.detail && problem.detail !== message ? problem.detail : null });
+  private showActionError(outcome: string, problem: Problem): void {
+    this.actionError.set({ outcome, message: describeProblem(problem) });
   }
 }
