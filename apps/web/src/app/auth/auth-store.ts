@@ -1,7 +1,7 @@
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { Observable, tap } from 'rxjs';
-
 import type { AuthSession, LoginRequest, RegisterRequest, User } from '@tallus/contracts';
+
 import { AuthApi } from './auth-api';
 
 /** Key of the session token in localStorage. */

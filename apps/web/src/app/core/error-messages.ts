@@ -1,5 +1,4 @@
 import { ValidationErrors } from '@angular/forms';
-
 import type { Problem, ProblemIssue } from '@tallus/contracts';
 
 /**

@@ -1,6 +1,6 @@
 import { AbstractControl, FormGroup } from '@angular/forms';
-
 import type { Problem } from '@tallus/contracts';
+
 import { describeIssue, describeProblem } from './error-messages';
 
 /**

@@ -1,7 +1,7 @@
 import { Injectable, inject } from '@angular/core';
 import { MatSnackBar } from '@angular/material/snack-bar';
-
 import type { Problem } from '@tallus/contracts';
+
 import { describeProblem } from './error-messages';
 
 /** Short messages at the bottom of the screen: outcomes of actions and problems that belong to no field. */

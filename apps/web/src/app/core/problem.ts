@@ -1,5 +1,4 @@
 import { HttpErrorResponse } from '@angular/common/http';
-
 import type { ErrorCode, Problem, ProblemIssue } from '@tallus/contracts';
 
 /** Code of the problem made up when the server could not be reached at all. */

@@ -1,7 +1,6 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable } from 'rxjs';
-
 import type { OutboxMessage } from '@tallus/contracts';
 
 /** The development outbox: e-mail the API sent to its local fake SMTP server. */

@@ -1,8 +1,8 @@
-import { Injectable, computed, effect, inject, signal } from '@angular/core';
+import { Injectable, computed, inject, signal } from '@angular/core';
 import { Observable, of, tap } from 'rxjs';
+import type { TeamSummary } from '@tallus/contracts';
 
 import { AuthStore } from '../auth/auth-store';
-import type { TeamSummary } from '@tallus/contracts';
 import { TeamsApi } from './teams-api';
 
 /** Key of the last team the user worked in, so the start page can return to it. */
@@ -12,42 +12,35 @@ const LAST_TEAM_STORAGE_KEY = 'tallus.lastTeam';
 @Injectable({ providedIn: 'root' })
 export class TeamStore {
   private readonly api = inject(TeamsApi);
+  private readonly authStore = inject(AuthStore);
 
-  private readonly teamsState = signal<TeamSummary[] | null>(null);
+  /** Teams as loaded, with the session they were loaded for: another session never sees them. */
+  private readonly loadedState = signal<{ token: string | null; teams: TeamSummary[] } | null>(null);
   private readonly currentTeamIdState = signal<string | null>(null);
 
-  /** The user's teams, sorted by name; null until loaded. */
-  readonly teams = this.teamsState.asReadonly();
+  /** The user's teams, sorted by name; null until loaded for the current session. */
+  readonly teams = computed(() => {
+    const loaded = this.loadedState();
+    return loaded !== null && loaded.token === this.authStore.token() ? loaded.teams : null;
+  });
   /** Id of the team the user works in now. */
   readonly currentTeamId = this.currentTeamIdState.asReadonly();
   /** The team the user works in now, once teams are loaded. */
   readonly currentTeam = computed(
-    () => this.teamsState()?.find((team) => team.id === this.currentTeamIdState()) ?? null,
+    () => this.teams()?.find((team) => team.id === this.currentTeamIdState()) ?? null,
   );
   /** Whether the user owns the current team (manages members and invitations). */
   readonly isOwner = computed(() => this.currentTeam()?.role === 'owner');
 
-  constructor() {
-    // Teams belong to a session: when the token changes (sign-out, another user), forget them.
-    const authStore = inject(AuthStore);
-    let sessionToken = authStore.token();
-    effect(() => {
-      const token = authStore.token();
-      if (token !== sessionToken) {
-        sessionToken = token;
-        this.reset();
-      }
-    });
-  }
-
   /** Loads the user's teams from the API. */
   load(): Observable<TeamSummary[]> {
-    return this.api.listTeams().pipe(tap((teams) => this.teamsState.set(sortByName(teams))));
+    const token = this.authStore.token();
+    return this.api.listTeams().pipe(tap((teams) => this.loadedState.set({ token, teams: sortByName(teams) })));
   }
 
   /** The teams, loading them only when not loaded yet. */
   ensureLoaded(): Observable<TeamSummary[]> {
-    const teams = this.teamsState();
+    const teams = this.teams();
     return teams === null ? this.load() : of(teams);
   }
 
@@ -58,7 +51,9 @@ export class TeamStore {
    */
   create(name: string): Observable<TeamSummary> {
     return this.api.createTeam(name).pipe(
-      tap((team) => this.teamsState.update((teams) => sortByName([...(teams ?? []), team]))),
+      tap((team) =>
+        this.loadedState.set({ token: this.authStore.token(), teams: sortByName([...(this.teams() ?? []), team]) }),
+      ),
     );
   }
 
@@ -78,16 +73,11 @@ export class TeamStore {
 
   /** The team to open on the start page: the last one used, else the first. */
   preferredTeam(): TeamSummary | null {
-    const teams = this.teamsState() ?? [];
+    const teams = this.teams() ?? [];
     const lastId = readLastTeamId();
     return teams.find((team) => team.id === lastId) ?? teams[0] ?? null;
   }
 
-  /** Forgets everything (on sign-out: the next user has other teams). */
-  reset(): void {
-    this.teamsState.set(null);
-    this.currentTeamIdState.set(null);
-  }
 }
 
 function sortByName(teams: TeamSummary[]): TeamSummary[] {

@@ -1,7 +1,6 @@
 import { HttpClient } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable } from 'rxjs';
-
 import type { Invitation, Member, Role, TeamSummary } from '@tallus/contracts';
 
 /** Calls of `/api/teams`: teams, members and invitations. */

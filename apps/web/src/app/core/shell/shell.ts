@@ -11,13 +11,13 @@ import { MatSidenavModule } from '@angular/material/sidenav';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { map } from 'rxjs';
+import type { TeamSummary } from '@tallus/contracts';
 
 import { AuthApi } from '../../auth/auth-api';
 import { AuthStore } from '../../auth/auth-store';
 import { NewTeamDialog } from '../../teams/new-team-dialog/new-team-dialog';
 import { roleView } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
-import type { TeamSummary } from '@tallus/contracts';
 import { Notifier } from '../notifier';
 import { toProblem } from '../problem';
 import { TEAM_SECTIONS } from './team-sections';

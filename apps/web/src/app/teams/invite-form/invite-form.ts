@@ -5,8 +5,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-
 import type { Role } from '@tallus/contracts';
+
 import { describeProblem, describeValidationErrors } from '../../core/error-messages';
 import { showProblemAtFields } from '../../core/form-problems';
 import { Notifier } from '../../core/notifier';

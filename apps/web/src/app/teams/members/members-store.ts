@@ -1,7 +1,7 @@
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { Observable, forkJoin, of, tap } from 'rxjs';
-
 import type { Invitation, Member, Role } from '@tallus/contracts';
+
 import { TeamsApi } from '../teams-api';
 
 /**

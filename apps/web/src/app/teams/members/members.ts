@@ -9,9 +9,9 @@ import { MatSelectChange, MatSelectModule } from '@angular/material/select';
 import { MatTableModule } from '@angular/material/table';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { Router } from '@angular/router';
+import type { Member, Problem, Role } from '@tallus/contracts';
 
 import { AuthStore } from '../../auth/auth-store';
-import type { Member, Problem, Role } from '@tallus/contracts';
 import { describeProblem } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';

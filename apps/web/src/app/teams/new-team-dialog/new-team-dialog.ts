@@ -5,8 +5,8 @@ import { MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-
 import type { TeamSummary } from '@tallus/contracts';
+
 import { describeProblem, describeValidationErrors } from '../../core/error-messages';
 import { showProblemAtFields } from '../../core/form-problems';
 import { toProblem } from '../../core/problem';
