@@ -14,6 +14,10 @@ import type { BalanceOptions } from './balance-result';
  * @throws ChemError BALANCE_UNKNOWN_SPECIES (span over `formulaText`), or FORMULA_* codes.
  */
 export function findTermIndex(equation: Equation, formulaText: string): number {
+  // The same text is the same species: most pins and targets repeat the equation's own spelling.
+  const written = formulaText.trim();
+  const exact = equation.terms.findIndex((term) => term.formula.text === written);
+  if (exact >= 0) return exact;
   const formula = parseFormula(formulaText);
   const index = equation.terms.findIndex((term) => isSameSpecies(term.formula, formula));
   if (index < 0) {

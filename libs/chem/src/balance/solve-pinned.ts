@@ -1,9 +1,9 @@
 /**
- * Balances with some coefficients fixed ("pinned"). The pins become rows `d·x_p − n·t = 0` of a
- * system with one extra unknown `t`; its null space vectors with `t ≠ 0`, scaled to `t = 1`,
- * are the balances that honour the pins.
+ * Balances with some coefficients fixed ("pinned"). The pinned columns move to the right-hand side
+ * as one extra column with unknown `t`; null space vectors with `t ≠ 0`, scaled to `t = 1`, are the
+ * balances that honour the pins, and those with `t = 0` are the directions left free.
  */
-import { gcdBig, Rational } from '../rational/rational';
+import { gcdBig, lcmBig, Rational } from '../rational/rational';
 import { integerNullSpace } from './null-space';
 
 /** The balances that honour the pins. */
@@ -22,13 +22,20 @@ function primitive(vector: bigint[]): bigint[] {
   return content > 1n ? vector.map((value) => value / content) : vector;
 }
 
-function pinRows(columns: number, pins: ReadonlyMap<number, Rational>): bigint[][] {
-  return [...pins].map(([column, value]) => {
-    const row = new Array<bigint>(columns + 1).fill(0n);
-    row[column] = value.den;
-    row[columns] = -value.num;
-    return row;
+/**
+ * Moves the pinned columns to the right-hand side: `A_free · y + b · t = 0`, where `b` is
+ * `Σ A_p · pin_p` scaled to integers by the common denominator `scale` of the pins. Solving the
+ * small system of the free columns keeps the integers short, which matters for large systems.
+ */
+function reduceToFreeColumns(rows: readonly (readonly bigint[])[], free: readonly number[], pins: ReadonlyMap<number, Rational>) {
+  let scale = 1n;
+  for (const value of pins.values()) scale = lcmBig(scale, value.den);
+  const reduced = rows.map((row) => {
+    let pinned = 0n;
+    for (const [column, value] of pins) pinned += row[column] * value.num * (scale / value.den);
+    return [...free.map((column) => row[column]), pinned];
   });
+  return { reduced, scale };
 }
 
 /**
@@ -42,16 +49,23 @@ export function solvePinned(
   columns: number,
   pins: ReadonlyMap<number, Rational>,
 ): PinnedSolution {
-  const augmented = [...rows.map((row) => [...row, 0n]), ...pinRows(columns, pins)];
-  const basis = integerNullSpace(augmented, columns + 1);
-  const anchor = basis.find((vector) => vector[columns] !== 0n);
+  const free = Array.from({ length: columns }, (_, column) => column).filter((column) => !pins.has(column));
+  const { reduced, scale } = reduceToFreeColumns(rows, free, pins);
+  const basis = integerNullSpace(reduced, free.length + 1);
+  const t = free.length;
+  const expand = (values: readonly bigint[]): bigint[] => {
+    const full = new Array<bigint>(columns).fill(0n);
+    free.forEach((column, index) => (full[column] = values[index]));
+    return full;
+  };
+  const anchor = basis.find((vector) => vector[t] !== 0n);
   if (anchor === undefined) {
-    return { freedom: basis.length, particular: null, directions: basis.map((vector) => vector.slice(0, columns)) };
+    return { freedom: basis.length, particular: null, directions: basis.map((vector) => expand(vector.slice(0, t))) };
   }
-  const scale = anchor[columns];
-  const particular = anchor.slice(0, columns).map((value) => Rational.of(value, scale));
+  const particular = Array.from({ length: columns }, (_, column) => pins.get(column) ?? Rational.ZERO);
+  free.forEach((column, index) => (particular[column] = Rational.of(anchor[index], anchor[t] * scale)));
   const directions = basis
     .filter((vector) => vector !== anchor)
-    .map((vector) => primitive(vector.slice(0, columns).map((value, index) => value * scale - anchor[index] * vector[columns])));
+    .map((vector) => primitive(expand(vector.slice(0, t).map((value, index) => value * anchor[t] - anchor[index] * vector[t]))));
   return { freedom: basis.length, particular, directions };
 }
