@@ -1,10 +1,10 @@
+import { CHEM_ERROR_CODES } from '@tallus/chem';
 import { z } from 'zod';
 
 /**
- * Every machine-readable `code` the API puts in a problem body, plus the two
- * codes the client uses when no problem body arrives (`NETWORK`, `UNKNOWN`).
- * The chemistry engine's codes are merged into {@link ERROR_CODES} when its
- * errors start flowing through the API.
+ * The API's own machine-readable codes, plus the two codes the client uses
+ * when no problem body arrives (`NETWORK`, `UNKNOWN`). The chemistry engine's
+ * codes join them in {@link ERROR_CODES}.
  */
 export const API_ERROR_CODES = [
   /** The body, query or a parameter does not match its schema (400, with `issues`). */
@@ -56,8 +56,8 @@ export const API_ERROR_CODES = [
 /** One of {@link API_ERROR_CODES}. */
 export type ApiErrorCode = (typeof API_ERROR_CODES)[number];
 
-/** Every code a problem body may carry. */
-export const ERROR_CODES = [...API_ERROR_CODES] as const;
+/** Every code a problem body (or one of its issues) may carry: the API's and the chemistry engine's. */
+export const ERROR_CODES = [...API_ERROR_CODES, ...CHEM_ERROR_CODES] as const;
 
 /** One of {@link ERROR_CODES}. */
 export type ErrorCode = (typeof ERROR_CODES)[number];

@@ -1,3 +1,4 @@
+import type { ChemError } from '@tallus/chem';
 import type { ApiErrorCode } from '@tallus/contracts';
 
 /**
@@ -35,3 +36,17 @@ export class RateLimitedError extends AppError {}
 
 /** A dependency such as the database does not answer (503). */
 export class ServiceUnavailableError extends AppError {}
+
+/**
+ * A chemistry error from libs/chem with the path of the request field whose
+ * text it is about, e.g. `['reactions', 2, 'equation']` (422).
+ */
+export class ChemInputError extends Error {
+  constructor(
+    readonly path: ReadonlyArray<string | number>,
+    readonly chemError: ChemError,
+  ) {
+    super(chemError.message);
+    this.name = 'ChemInputError';
+  }
+}

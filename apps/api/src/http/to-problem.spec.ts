@@ -1,9 +1,11 @@
 import { NotFoundError as OrmNotFoundError, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { describe, expect, it } from 'vitest';
+import { ChemError } from '@tallus/chem';
 import { registerRequestSchema } from '@tallus/contracts';
 import { z } from 'zod';
 import {
   AuthenticationError,
+  ChemInputError,
   ConflictError,
   ForbiddenError,
   GoneError,
@@ -29,6 +31,7 @@ describe('toProblem', () => {
     ['a GoneError', new GoneError('INVITATION_EXPIRED', 'expired'), 410, 'INVITATION_EXPIRED'],
     ['a RateLimitedError', new RateLimitedError('AUTH_RATE_LIMITED', 'slow down'), 429, 'AUTH_RATE_LIMITED'],
     ['a ServiceUnavailableError', new ServiceUnavailableError('DATABASE_UNAVAILABLE', 'down'), 503, 'DATABASE_UNAVAILABLE'],
+    ['a ChemError', new ChemError('FORMULA_MIXED_SITE', 'Give the proportions', { start: 0, end: 7 }), 422, 'FORMULA_MIXED_SITE'],
     ['a plain Error', new Error('connection reset by peer'), 500, 'INTERNAL_ERROR'],
     ['a thrown string', 'oops', 500, 'INTERNAL_ERROR'],
   ])('When the error is %s, then the status is %i with code %s', (_label, error, status, code) => {
@@ -52,6 +55,17 @@ describe('toProblem', () => {
 
     expect(problem.status).toBe(400);
     expect(problem.issues?.map((issue) => issue.path)).toEqual([['password']]);
+  });
+
+  it('When a ChemError comes with a field path, then the issue carries the path and the span', () => {
+    const chemError = new ChemError('FORMULA_UNKNOWN_ELEMENT', 'Unknown element Xx', { start: 4, end: 6 });
+
+    const problem = toProblem(new ChemInputError(['reactions', 2, 'equation'], chemError), 'req-1');
+
+    expect(problem).toMatchObject({ status: 422, code: 'FORMULA_UNKNOWN_ELEMENT' });
+    expect(problem.issues).toEqual([
+      { code: 'FORMULA_UNKNOWN_ELEMENT', message: 'Unknown element Xx', path: ['reactions', 2, 'equation'], span: { start: 4, end: 6 } },
+    ]);
   });
 
   it('When the error is unexpected, then the body carries the request id and hides the message', () => {

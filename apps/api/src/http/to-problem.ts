@@ -1,9 +1,11 @@
 import { NotFoundError as OrmNotFoundError, UniqueConstraintViolationException } from '@mikro-orm/core';
+import { isChemError, type ChemError } from '@tallus/chem';
 import { problemTypeFor, type ErrorCode, type Problem, type ProblemIssue } from '@tallus/contracts';
 import { ZodError } from 'zod';
 import {
   AppError,
   AuthenticationError,
+  ChemInputError,
   ConflictError,
   ForbiddenError,
   GoneError,
@@ -24,7 +26,11 @@ const APP_ERROR_STATUS: ReadonlyArray<[abstract new (...args: never[]) => AppErr
 ];
 
 /**
- * Turns anything thrown while handling a request into an RFC 9457 problem body.
+ * Turns anything thrown while handling a request into an RFC 9457 problem body:
+ * ZodError → 400 REQUEST_INVALID with field paths; ChemError → 422 with its
+ * code, span and (through {@link ChemInputError}) the field path; the API's
+ * own errors → their status; a unique violation → 409; anything else → 500
+ * with a generic detail and the request id.
  * Pure: it neither logs nor sends.
  *
  * @param error the thrown value
@@ -38,6 +44,10 @@ export function toProblem(error: unknown, requestId: string): Problem {
   }
   if (isMalformedJson(error)) {
     return problem(400, 'Bad Request', 'REQUEST_MALFORMED_JSON', 'The request body is not valid JSON.');
+  }
+  if (error instanceof ChemInputError || isChemError(error)) {
+    const [chemError, path] = error instanceof ChemInputError ? [error.chemError, error.path] : [error, []];
+    return problem(422, 'Unprocessable Content', chemError.code, chemError.message, { issues: [toChemIssue(chemError, path)] });
   }
   if (error instanceof AppError) {
     const [, status, title] = APP_ERROR_STATUS.find(([type]) => error instanceof type) ?? [AppError, 500, 'Internal Server Error'];
@@ -56,6 +66,10 @@ export function toProblem(error: unknown, requestId: string): Problem {
 
 function problem(status: number, title: string, code: ErrorCode, detail: string, extra: Partial<Problem> = {}): Problem {
   return { type: problemTypeFor(code), title, status, detail, code, ...extra };
+}
+
+function toChemIssue(error: ChemError, path: ReadonlyArray<string | number>): ProblemIssue {
+  return { code: error.code, message: error.message, path: [...path], span: { start: error.span.start, end: error.span.end } };
 }
 
 function toIssue(issue: ZodError['issues'][number]): ProblemIssue {

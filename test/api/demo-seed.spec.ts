@@ -1,0 +1,79 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_TEAMS } from '../../apps/api/src/db/seeders/demo-accounts';
+import { seedDemo } from '../../apps/api/src/db/seeders/demo-seeder';
+import { startTestApp, type TestApp } from './support/test-app';
+
+/** Row counts of the demo's users, their memberships and their teams. */
+async function countDemoRows(testApp: TestApp) {
+  const emails = DEMO_ACCOUNTS.map((account) => account.email);
+  const [row] = await testApp.orm.em.fork().getConnection().execute(
+    `select (select count(*)::int from users where email in (${emails.map(() => '?').join(',')})) as users,
+            (select count(*)::int from memberships m join users u on u.id = m.user_id where u.email in (${emails.map(() => '?').join(',')})) as memberships,
+            (select count(distinct m.team_id)::int from memberships m join users u on u.id = m.user_id where u.email in (${emails.map(() => '?').join(',')})) as teams`,
+    [...emails, ...emails, ...emails],
+  );
+  return row as { users: number; memberships: number; teams: number };
+}
+
+describe('The demo seeder', () => {
+  let testApp: TestApp;
+
+  beforeAll(async () => {
+    testApp = await startTestApp();
+  });
+
+  afterAll(async () => {
+    await testApp.close();
+  });
+
+  it('When the seeder runs twice, then the second run adds nothing and nothing is lost', async () => {
+    await seedDemo(testApp.orm.em, 10);
+    const afterFirst = await countDemoRows(testApp);
+
+    const second = await seedDemo(testApp.orm.em, 10);
+
+    expect(second).toEqual({ usersCreated: 0, teamsCreated: 0, membershipsCreated: 0 });
+    expect(afterFirst).toEqual({ users: 8, memberships: 8, teams: 2 });
+    expect(await countDemoRows(testApp)).toEqual(afterFirst);
+  });
+
+  it('When the demo has been changed, then seeding again keeps the change (a promoted viewer stays promoted)', async () => {
+    await seedDemo(testApp.orm.em, 10);
+    await testApp.orm.em
+      .fork()
+      .getConnection()
+      .execute("update memberships set role = 'editor' where user_id = (select id from users where email = 'viewer@ironbark.example')");
+
+    await seedDemo(testApp.orm.em, 10);
+    const login = await request(testApp.app).post('/api/auth/login').send({ email: 'viewer@ironbark.example', password: DEMO_PASSWORD });
+    const me = await request(testApp.app).get('/api/auth/me').set('Authorization', `Bearer ${login.body.token}`);
+
+    expect(me.body.memberships).toEqual([{ teamId: expect.any(String), teamName: 'Ironbark Creek', role: 'editor' }]);
+    await testApp.orm.em
+      .fork()
+      .getConnection()
+      .execute("update memberships set role = 'viewer' where user_id = (select id from users where email = 'viewer@ironbark.example')");
+  });
+
+  it.each(DEMO_ACCOUNTS.map((account) => [account.email, account.team, account.role] as const))(
+    'When %s signs in with the demo password, then they are in %s as %s',
+    async (email, team, role) => {
+      await seedDemo(testApp.orm.em, 10);
+
+      const login = await request(testApp.app).post('/api/auth/login').send({ email, password: DEMO_PASSWORD });
+      const me = await request(testApp.app).get('/api/auth/me').set('Authorization', `Bearer ${login.body.token}`);
+
+      expect(login.status).toBe(200);
+      expect(me.body.memberships).toEqual([{ teamId: expect.any(String), teamName: team, role }]);
+    },
+  );
+
+  it('When the demo data is listed, then there are two invented teams with one account per role each and a password of 10+ characters', () => {
+    expect(DEMO_TEAMS.map((team) => team.name)).toEqual(['Kestrel Flats', 'Ironbark Creek']);
+    for (const team of DEMO_TEAMS) {
+      expect(DEMO_ACCOUNTS.filter((account) => account.team === team.name).map((account) => account.role)).toEqual(['owner', 'reviewer', 'editor', 'viewer']);
+    }
+    expect(DEMO_PASSWORD.length).toBeGreaterThanOrEqual(10);
+  });
+});
