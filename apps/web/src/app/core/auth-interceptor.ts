@@ -23,7 +23,9 @@ export const authInterceptor: HttpInterceptorFn = (request, next) => {
     catchError((error: unknown) => {
       if (error instanceof HttpErrorResponse && error.status === 401) {
         authStore.clearSession();
-        const returnUrl = router.url;
+        // During a navigation (a guard loading data) the page the user wants is its target, not router.url.
+        const navigation = router.currentNavigation();
+        const returnUrl = navigation ? router.serializeUrl(navigation.extractedUrl) : router.url;
         void router.navigate(['/sign-in'], {
           queryParams: returnUrl.startsWith('/sign-in') ? {} : { returnUrl, expired: 1 },
         });
