@@ -60,6 +60,16 @@ describe('Malformed requests', () => {
     expect(response.body.code).toBe('REQUEST_MALFORMED_JSON');
   });
 
+  it('When the body is larger than 1 MB, then the answer is 413 REQUEST_TOO_LARGE', async () => {
+    const response = await request(testApp.app)
+      .post('/api/teams')
+      .set('Authorization', owner.auth)
+      .send({ name: 'x'.repeat(1_100_000) });
+
+    expect(response.status).toBe(413);
+    expect(response.body.code).toBe('REQUEST_TOO_LARGE');
+  });
+
   it('When a malformed request fails, then nothing is created', async () => {
     await request(testApp.app).post('/api/teams').set('Authorization', owner.auth).send({ name: 'x'.repeat(121) }).expect(400);
 

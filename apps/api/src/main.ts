@@ -7,10 +7,11 @@
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { MikroORM } from '@mikro-orm/postgresql';
-import { pino, type Logger } from 'pino';
+import type { Logger } from 'pino';
 import { createApp } from './app';
 import { loadConfig, type Config } from './config/env';
 import { openDatabase } from './db/open-database';
+import { createLogger } from './http/create-logger';
 import { seedDemo } from './db/seeders/demo-seeder';
 import { FakeSmtpServer } from './mail/fake-smtp-server';
 import { createSmtpMailer, type Mailer } from './mail/mailer';
@@ -50,7 +51,7 @@ async function stop(server: Server, resources: { orm: MikroORM; mailer: Mailer; 
 
 async function main(): Promise<void> {
   const config = loadConfig();
-  const logger = pino({ level: config.logLevel });
+  const logger = createLogger(config.logLevel);
   const orm = await openDatabase(config);
   if (config.isDemoSeedWanted) logger.debug(await seedDemo(orm.em, config.bcryptCost), 'demo data checked');
   const { mailer, fakeSmtp } = await startMail(config, logger);

@@ -11,6 +11,8 @@ export const API_ERROR_CODES = [
   'REQUEST_INVALID',
   /** The body is not valid JSON (400). */
   'REQUEST_MALFORMED_JSON',
+  /** The request body is larger than the API accepts (413). */
+  'REQUEST_TOO_LARGE',
   /** The route needs a signed-in user and no token came (401). */
   'AUTH_REQUIRED',
   /** The bearer token is malformed, forged, expired, or names a user that no longer exists (401). */

@@ -16,12 +16,16 @@ import {
 import { toProblem } from './to-problem';
 
 const zodError = z.object({ email: z.email(), team: z.object({ name: z.string() }) }).safeParse({ email: 'x', team: {} }).error;
-const malformedJson = Object.assign(new SyntaxError('Unexpected token } in JSON'), { type: 'entity.parse.failed' });
+/** Errors shaped as body-parser (inside express.json()) throws them. */
+const bodyParserError = (type: string, status: number) => Object.assign(new Error(type), { type, status, statusCode: status, expose: true });
+const malformedJson = Object.assign(new SyntaxError('Unexpected token } in JSON'), { type: 'entity.parse.failed', status: 400, expose: true });
 
 describe('toProblem', () => {
   it.each([
     ['a ZodError', zodError, 400, 'REQUEST_INVALID'],
     ['malformed JSON', malformedJson, 400, 'REQUEST_MALFORMED_JSON'],
+    ['a body too large', bodyParserError('entity.too.large', 413), 413, 'REQUEST_TOO_LARGE'],
+    ['an unsupported charset', bodyParserError('charset.unsupported', 415), 400, 'REQUEST_INVALID'],
     ['an AuthenticationError', new AuthenticationError('AUTH_INVALID_TOKEN', 'bad token'), 401, 'AUTH_INVALID_TOKEN'],
     ['a ForbiddenError', new ForbiddenError('TEAM_ROLE_REQUIRED', 'owners only'), 403, 'TEAM_ROLE_REQUIRED'],
     ['a NotFoundError', new NotFoundError('TEAM_NOT_FOUND', 'no team'), 404, 'TEAM_NOT_FOUND'],

@@ -42,8 +42,15 @@ export function toProblem(error: unknown, requestId: string): Problem {
       issues: error.issues.map(toIssue),
     });
   }
-  if (isMalformedJson(error)) {
+  const bodyError = bodyParserError(error);
+  if (bodyError === 'entity.parse.failed') {
     return problem(400, 'Bad Request', 'REQUEST_MALFORMED_JSON', 'The request body is not valid JSON.');
+  }
+  if (bodyError === 'entity.too.large') {
+    return problem(413, 'Content Too Large', 'REQUEST_TOO_LARGE', 'The request body is larger than the API accepts.');
+  }
+  if (bodyError) {
+    return problem(400, 'Bad Request', 'REQUEST_INVALID', 'The request body cannot be read (encoding or charset).');
   }
   if (error instanceof ChemInputError || isChemError(error)) {
     const [chemError, path] = error instanceof ChemInputError ? [error.chemError, error.path] : [error, []];
@@ -76,7 +83,10 @@ function toIssue(issue: ZodError['issues'][number]): ProblemIssue {
   return { code: issue.code, message: issue.message, path: issue.path.map((key) => (typeof key === 'symbol' ? String(key) : key)) };
 }
 
-/** Whether express.json() rejected the body as unparseable. */
-function isMalformedJson(error: unknown): boolean {
-  return error instanceof SyntaxError && (error as SyntaxError & { type?: string }).type === 'entity.parse.failed';
+/** The `type` of an error from express.json() (body-parser), which marks its client errors with `expose`. */
+function bodyParserError(error: unknown): string | undefined {
+  if (!(error instanceof Error)) return undefined;
+  const { type, expose, status } = error as Error & { type?: unknown; expose?: unknown; status?: unknown };
+  const isClientError = expose === true && typeof status === 'number' && status >= 400 && status < 500;
+  return isClientError && typeof type === 'string' ? type : undefined;
 }
