@@ -10,7 +10,7 @@ export const createTeamRequestSchema = z.object({
 });
 export type CreateTeamRequest = z.infer<typeof createTeamRequestSchema>;
 
-/** A team with the caller's role in it: `POST /api/teams` (201) and each row of `GET /api/teams`. */
+/** A team with the caller's role in it: `POST /api/teams` (201), `GET /api/teams/:teamId`, and each row of `GET /api/teams`. */
 export const teamSummarySchema = z.object({
   id: z.uuid(),
   name: z.string(),

@@ -4,7 +4,8 @@ import express, { Router } from 'express';
 
 /**
  * Serves the built client from `folder`: static files, and `index.html` for
- * every other GET outside `/api` (the client's router takes over there).
+ * every other GET outside `/api` that does not name a file (the client's
+ * router takes over there); a missing file such as `/old-chunk.js` gets 404.
  * Hashed bundles are cached for a year; index.html is never cached.
  *
  * @param folder the client build's `browser` folder
@@ -24,7 +25,9 @@ export function serveClient(folder: string): Router | undefined {
     }),
   );
   router.get('/{*splat}', (req, res, next) => {
-    if (req.path === '/api' || req.path.startsWith('/api/')) return next();
+    const isApi = req.path === '/api' || req.path.startsWith('/api/');
+    const isFile = /\.[A-Za-z0-9]+$/.test(req.path);
+    if (isApi || isFile) return next();
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(indexFile);
   });
