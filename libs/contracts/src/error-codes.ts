@@ -41,6 +41,44 @@ export const API_ERROR_CODES = [
   'INVITATION_WRONG_USER',
   /** The invited address already belongs to a member of the team (409). */
   'INVITATION_ALREADY_MEMBER',
+  /** No such team species, or not in a team of the caller's (404). */
+  'SPECIES_NOT_FOUND',
+  /** A species of the same name or formula already exists in the team (409). */
+  'SPECIES_DUPLICATE',
+  /** No such reaction set, or not in a team of the caller's (404). */
+  'REACTION_SET_NOT_FOUND',
+  /** No such reaction, or not in a team of the caller's (404). */
+  'REACTION_NOT_FOUND',
+  /** No such net reaction, or not in a team of the caller's (404). */
+  'NET_REACTION_NOT_FOUND',
+  /** A net reaction names a reaction that is not in its set (400, with the path). */
+  'NET_REACTION_UNKNOWN_REACTION',
+  /** The reorder list is not exactly the set's reactions (409: reload and retry). */
+  'REORDER_MISMATCH',
+  /** The record changed since the version the request carries (409: reload, then retry). */
+  'VERSION_CONFLICT',
+  /** The set is under review: no edits until it is approved or returned (409). */
+  'REVIEW_LOCKED',
+  /** The review step does not apply to the set's current state (409), e.g. approving a draft. */
+  'REVIEW_STATE_INVALID',
+  /** A set without reactions cannot be submitted (409). */
+  'REVIEW_EMPTY_SET',
+  /** The submitter of a set cannot approve or return it (403). */
+  'REVIEW_SELF_APPROVAL',
+  /** A set with vetted revisions is kept: revisions stay readable forever (409). */
+  'REACTION_SET_HAS_REVISIONS',
+  /** No such revision of the set (404). */
+  'REVISION_NOT_FOUND',
+  /** Only a vetted set can be published (409). */
+  'PUBLISH_NOT_VETTED',
+  /** This revision is already in the library (409). */
+  'PUBLISH_ALREADY_PUBLISHED',
+  /** No such library publication (404). */
+  'PUBLICATION_NOT_FOUND',
+  /** The import file is malformed; `issues` lists every problem with its path (400). Nothing was saved. */
+  'IMPORT_INVALID',
+  /** Too many computation requests; retry later (429). */
+  'CHEM_RATE_LIMITED',
   /** No route or resource at this address (404). */
   'NOT_FOUND',
   /** A concurrent or duplicate write was refused (409). */
