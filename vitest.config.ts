@@ -18,6 +18,10 @@ export default defineConfig({
       },
       {
         resolve: { alias },
+        test: { name: 'architecture', include: ['test/architecture/**/*.spec.ts'], environment: 'node' },
+      },
+      {
+        resolve: { alias },
         test: { name: 'contracts', include: ['libs/contracts/**/*.spec.ts'], environment: 'node' },
       },
       {
