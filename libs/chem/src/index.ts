@@ -71,3 +71,37 @@ export {
 // JSON forms for the API and the command line
 export { balanceToJson, checkToJson, combineToJson, massToJson } from './json/to-json';
 export type { BalanceJson, CheckJson, CombineJson, MassJson } from './json/to-json';
+
+// Water analyses: solutes, units, charge balance
+export { findSolute, requireSolute, SOLUTES } from './water/solutes';
+export type { Solute } from './water/solutes';
+export {
+  CACO3_MG_PER_MEQ,
+  CONCENTRATION_UNITS,
+  isConcentrationUnit,
+  parseConcentration,
+  toMilliequivalentsPerLitre,
+  toMillimolesPerLitre,
+} from './water/concentration';
+export type { Concentration, ConcentrationUnit } from './water/concentration';
+export { CHARGE_BALANCE_NOTES, chargeBalance, DEFAULT_CBE_THRESHOLD } from './water/charge-balance';
+export type {
+  ChargeBalanceConvention,
+  ChargeBalanceNote,
+  ChargeBalanceOptions,
+  ChargeBalanceResult,
+  SoluteValue,
+  WaterAnalysis,
+} from './water/charge-balance';
+
+// Inverse mass balance
+export { solveMassBalance } from './mass-balance/solve-mass-balance';
+export type { MassBalanceInput, MassBalanceModel, MassBalanceResult, MassBalanceStatus } from './mass-balance/solve-mass-balance';
+export { impliedReaction } from './mass-balance/implied-reaction';
+export type { ImpliedReaction } from './mass-balance/implied-reaction';
+export { isDissolved, phaseColumn } from './mass-balance/phase-columns';
+export type { Constraint, PhaseInput, PhaseRule } from './mass-balance/phase-columns';
+export { operationalValence, REDOX_ELEMENTS } from './mass-balance/operational-valence';
+export { minimalFittingSubsets } from './mass-balance/minimal-subsets';
+export type { FittingSubset } from './mass-balance/minimal-subsets';
+export type { WaterComposition } from './mass-balance/water-change';
