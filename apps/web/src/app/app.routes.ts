@@ -41,6 +41,21 @@ export const routes: Routes = [
             loadComponent: () => import('./teams/team-home/team-home').then((m) => m.TeamHome),
           },
           {
+            path: 'reaction-sets/:setId',
+            title: 'Reaction set · Tallus',
+            loadComponent: () => import('./reaction-sets/set-editor/set-editor').then((m) => m.SetEditor),
+          },
+          {
+            path: 'species',
+            title: 'Species catalogue · Tallus',
+            loadComponent: () => import('./species/species-catalogue/species-catalogue').then((m) => m.SpeciesCatalogue),
+          },
+          {
+            path: 'library',
+            title: 'Library · Tallus',
+            loadComponent: () => import('./library/library-page/library-page').then((m) => m.LibraryPage),
+          },
+          {
             path: 'members',
             title: 'Members · Tallus',
             loadComponent: () => import('./teams/members/members').then((m) => m.Members),

@@ -21,6 +21,22 @@ const messagesByCode: Readonly<Record<string, string>> = {
   INVITATION_ALREADY_MEMBER: 'This person is a member of the team already.',
 };
 
+/**
+ * What to do about a chemistry problem, added after libs/chem's own message (which already
+ * names the culprit, e.g. the unknown element). Serves the instant checks in the browser and
+ * the API's 422 problems alike.
+ */
+const chemHintsByCode: Readonly<Record<string, string>> = {
+  FORMULA_UNKNOWN_ELEMENT: 'Element symbols start with a capital letter: Co is cobalt, CO is carbon monoxide.',
+  FORMULA_MIXED_SITE: 'Give the proportions of the site, e.g. (Mg0.9,Fe0.1)2SiO4.',
+  FORMULA_AMBIGUOUS_CHARGE: 'Write the charge with a caret: Ca^2+ or Ca²⁺.',
+  FORMULA_UNBALANCED_PAREN: 'Close every bracket you open.',
+  EQUATION_NO_ARROW: 'Example: CaCO3 + 2 H+ -> Ca^2+ + CO2 + H2O',
+  EQUATION_EMPTY_TERM: "Put a space on each side of a '+' between species; a charge is written ^+ or at the formula's end.",
+  BUDGET_UNKNOWN_REFERENCE: 'Choose the reference species among the species of the reaction.',
+  BALANCE_UNKNOWN_SPECIES: 'Only species of the reaction can be pinned or normalised to.',
+};
+
 /** Texts for the client-side validators of reactive forms, keyed by validator error key. */
 const messagesByValidator: Readonly<Record<string, (details: unknown) => string>> = {
   required: () => 'Required.',
@@ -47,6 +63,17 @@ export function describeProblem(problem: Problem): string {
  */
 export function describeIssue(issue: ProblemIssue): string {
   return messagesByCode[issue.code] ?? issue.message;
+}
+
+/**
+ * The text for a chemistry problem found in the browser or reported by the API:
+ * libs/chem's message, then what to do about it where that helps.
+ *
+ * @param issue a code and message, as `ChemError.toIssue()` or a problem issue gives them
+ */
+export function describeChemIssue(issue: { code: string; message: string }): string {
+  const hint = chemHintsByCode[issue.code];
+  return hint ? `${issue.message} ${hint}` : issue.message;
 }
 
 /**

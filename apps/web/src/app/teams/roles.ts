@@ -24,3 +24,17 @@ export const ROLE_VIEWS: readonly RoleView[] = [
 export function roleView(role: Role): RoleView {
   return ROLE_VIEWS.find((view) => view.role === role) ?? ROLE_VIEWS[ROLE_VIEWS.length - 1];
 }
+
+/** Rank of each role: a higher rank includes every right of a lower one (as the API ranks them). */
+const ROLE_RANK: Readonly<Record<Role, number>> = { owner: 4, reviewer: 3, editor: 2, viewer: 1 };
+
+/**
+ * Whether a member with role `actual` may do what needs role `required`.
+ * Kept here rather than imported from the contracts so that zod stays out of the bundle.
+ *
+ * @param actual the member's role
+ * @param required the weakest role that may act
+ */
+export function hasRoleAtLeast(actual: Role, required: Role): boolean {
+  return ROLE_RANK[actual] >= ROLE_RANK[required];
+}

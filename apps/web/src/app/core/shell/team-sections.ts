@@ -8,6 +8,8 @@ export interface TeamSection {
 
 /** The sections of a team, in navigation order. Later features add theirs here. */
 export const TEAM_SECTIONS: readonly TeamSection[] = [
-  { path: '', label: 'Overview', icon: 'space_dashboard' },
+  { path: '', label: 'Reaction sets', icon: 'science' },
+  { path: 'species', label: 'Species catalogue', icon: 'hexagon' },
+  { path: 'library', label: 'Library', icon: 'local_library' },
   { path: 'members', label: 'Members', icon: 'group' },
 ];
