@@ -105,3 +105,15 @@ export { operationalValence, REDOX_ELEMENTS } from './mass-balance/operational-v
 export { minimalFittingSubsets } from './mass-balance/minimal-subsets';
 export type { FittingSubset } from './mass-balance/minimal-subsets';
 export type { WaterComposition } from './mass-balance/water-change';
+
+// Mineral formulas from oxide analyses
+export { FEO_TO_FE2O3, findMineralGroup, findOxide, MINERAL_GROUPS, OXIDES, oxideMolarMass } from './oxides/oxide-table';
+export type { MineralGroup, OxideEntry } from './oxides/oxide-table';
+export { recalculateFormula } from './oxides/recalculate-formula';
+export type { FerricIron, FormulaRecalculation, OxideAnalysis } from './oxides/recalculate-formula';
+export { OXIDE_WARNINGS } from './oxides/oxide-warnings';
+export type { OxideWarning } from './oxides/oxide-warnings';
+export { endMembersOf } from './oxides/end-members';
+export type { EndMembers } from './oxides/end-members';
+export { formulaText, oxideWeightPercents, plagioclaseWeatheringEquation, weatheringEquation } from './oxides/formula-text';
+export type { WeatheringProducts } from './oxides/formula-text';
