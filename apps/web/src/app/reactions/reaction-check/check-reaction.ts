@@ -1,4 +1,4 @@
-import { checkEquation, isChemError, parseEquation, type ChemIssue, type OxidationStateMap } from '@tallus/chem';
+import { balanceEquation, checkEquation, isChemError, parseEquation, type ChemIssue, type Equation, type OxidationStateMap } from '@tallus/chem';
 
 /** What to check: the equation as typed and the budget options. */
 export interface CheckRequest {
@@ -20,7 +20,16 @@ export interface ResidualRow {
 
 /** The check of one reaction, in plain values a template can show. */
 export interface CheckView {
-  status: 'balanced' | 'unbalanced' | 'invalid' | 'empty';
+  status: 'balanced' | 'unbalanced' | 'open' | 'impossible' | 'invalid' | 'empty';
+  /**
+   * `check`: some coefficient was written, so the reaction is checked as written (a term without
+   * one counts 1). `balance`: none was written, so it is balanced, as the server does on save.
+   */
+  mode: 'check' | 'balance';
+  /** In `balance` mode: the balanced equation (when `balanced`), the balances (when `open`), what cannot balance (when `impossible`). */
+  balancedEquation: string | null;
+  balances: string[];
+  missing: string[];
   /** The species as written, in order; empty when the text does not parse. */
   species: string[];
   residuals: ResidualRow[];
@@ -45,6 +54,10 @@ export interface CheckView {
 /** The check of an empty field: nothing to say yet. */
 export const EMPTY_CHECK: CheckView = {
   status: 'empty',
+  mode: 'check',
+  balancedEquation: null,
+  balances: [],
+  missing: [],
   species: [],
   residuals: [],
   electrons: null,
@@ -74,6 +87,34 @@ export function checkReaction(request: CheckRequest): CheckView {
     return { ...EMPTY_CHECK, status: 'invalid', error: error.toIssue() };
   }
   const species = equation.terms.map((term) => term.formula.text);
+  if (equation.terms.every((term) => term.coefficient === null)) {
+    return balanceThenCheck(equation, species, request);
+  }
+  return checkAsWritten(equation, species, request);
+}
+
+/**
+ * No coefficient written: balance (to 1 mol of the reference when one is chosen), then check the
+ * balanced equation for its budgets, as the server does on save.
+ */
+function balanceThenCheck(equation: Equation, species: string[], request: CheckRequest): CheckView {
+  const balance = balanceEquation(equation, { normalizeTo: request.reference || undefined });
+  if (balance.status !== 'balanced' || balance.equation === null) {
+    return {
+      ...EMPTY_CHECK,
+      status: balance.status === 'unbalanced' ? 'invalid' : balance.status,
+      mode: 'balance',
+      species,
+      balances: [...(balance.balances ?? [])],
+      missing: [...(balance.missing ?? [])],
+      error: balance.error ?? null,
+    };
+  }
+  const checked = checkAsWritten(parseEquation(balance.equation), species, request);
+  return { ...checked, mode: 'balance', balancedEquation: balance.equation };
+}
+
+function checkAsWritten(equation: Equation, species: string[], request: CheckRequest): CheckView {
   const result = checkEquation(equation, {
     reference: request.reference || undefined,
     rockWeightPercent: request.rockWeightPercent ?? undefined,
@@ -83,6 +124,7 @@ export function checkReaction(request: CheckRequest): CheckView {
     return { ...EMPTY_CHECK, status: 'invalid', species, error: result.error ?? null };
   }
   return {
+    ...EMPTY_CHECK,
     status: result.status,
     species,
     residuals: [...result.residuals].map(([label, value]) => ({ label, value: value.toString(), isZero: value.isZero() })),

@@ -3,10 +3,13 @@ import { ChangeDetectionStrategy, Component, computed, input } from '@angular/co
 import { MatIconModule } from '@angular/material/icon';
 
 import { BalanceStatus } from '../../chem-view/balance-status/balance-status';
+import { EquationView } from '../../chem-view/equation-view/equation-view';
 import { Fraction } from '../../chem-view/fraction/fraction';
 import { describeChemIssue } from '../../core/error-messages';
 import { splitBySpan } from '../../core/split-by-span';
 import type { CheckView } from './check-reaction';
+
+const OPTION_ERRORS = new Set(['BUDGET_UNKNOWN_REFERENCE', 'BALANCE_UNKNOWN_SPECIES', 'BUDGET_BAD_AMOUNT']);
 
 /**
  * The check of one reaction: balance status (icon and word), residual of each element and of
@@ -14,7 +17,7 @@ import type { CheckView } from './check-reaction';
  */
 @Component({
   selector: 'tl-reaction-check',
-  imports: [BalanceStatus, DecimalPipe, Fraction, MatIconModule],
+  imports: [BalanceStatus, DecimalPipe, EquationView, Fraction, MatIconModule],
   templateUrl: './reaction-check.html',
   styleUrl: './reaction-check.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -34,7 +37,8 @@ export class ReactionCheck {
   });
   protected readonly errorPlace = computed(() => {
     const error = this.check().error;
-    return error ? splitBySpan(this.equation(), error.span) : null;
+    // Errors of the reference option point into that option's text, not into the equation.
+    return error && !OPTION_ERRORS.has(error.code) ? splitBySpan(this.equation(), error.span) : null;
   });
   protected readonly offRows = computed(() => this.check().residuals.filter((row) => !row.isZero).length);
 }
