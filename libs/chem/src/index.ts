@@ -117,3 +117,20 @@ export { endMembersOf } from './oxides/end-members';
 export type { EndMembers } from './oxides/end-members';
 export { formulaText, oxideWeightPercents, plagioclaseWeatheringEquation, weatheringEquation } from './oxides/formula-text';
 export type { WeatheringProducts } from './oxides/formula-text';
+
+// Acid-base accounting
+export {
+  ABA_NOTES,
+  AP_FACTOR,
+  AP_FACTOR_BICARBONATE,
+  acidBaseAccounting,
+  classifyNpr,
+  DEFAULT_NPR_BANDS,
+} from './aba/acid-base-accounting';
+export type { AbaClass, AbaInput, AbaNote, AbaResult, NprBands } from './aba/acid-base-accounting';
+export { ABA_MINERALS, mineralAcidBase, mineralFactor, SIDERITE_CAUTION } from './aba/mineral-acid-base';
+export type { AbaMineral, CarbonatePathway, MineralAbaOptions, MineralAbaResult, MineralFactor } from './aba/mineral-acid-base';
+
+// CO2 uptake
+export { CO2_CAUTIONS, mineralCo2Uptake, oxideCo2Potential, rockCo2Uptake } from './co2/co2-uptake';
+export type { Co2Uptake, MineralCo2Uptake, OxideCo2Potential } from './co2/co2-uptake';
