@@ -15,6 +15,7 @@ import {
   type CombineInput,
 } from '../src/index';
 import { describeBalance, describeCheck, describeCombine, describeMass } from './describe';
+import { runCo2, runMassBalance, runOxides } from './site-commands';
 
 /** What the command line may touch. */
 export interface CliIo {
@@ -28,7 +29,10 @@ const USAGE = `Usage: npm run --silent chem -- <command> ... [--json]
   check "<equation with coefficients>" [--reference <formula>] [--percent <wt%>]
   mass "<formula>"
   combine <file.json>     {"reactions":[{"equation":"...","multiplier":"1"}],"cancel":["Fe^2+"]}
-Exit code 0 when the status is balanced (or combined, or the mass was computed), 1 otherwise.`;
+  mass-balance <file.json> {"initial":{..},"final":{..},"phases":[{"name","formula"|"equation","rule"}],"constraints":[..]}
+  oxides <file.json>      {"oxides":{"SiO2":40.2,...},"oxygens":4,"ferric":"droop","cations":3}
+  co2 "<formula>"
+Exit code 0 when the status is balanced (combined; exact with a valid model; computed), 1 otherwise.`;
 
 interface Parsed {
   readonly command: string;
@@ -109,6 +113,9 @@ const COMMANDS: Readonly<Record<string, (io: CliIo, args: Parsed) => number>> = 
   check: runCheck,
   mass: runMass,
   combine: runCombine,
+  'mass-balance': (io, args) => runMassBalance(io, io.readFile(args.argument), args.isJson),
+  oxides: (io, args) => runOxides(io, io.readFile(args.argument), args.isJson),
+  co2: (io, args) => runCo2(io, args.argument, args.isJson),
 };
 
 /**
