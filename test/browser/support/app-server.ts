@@ -38,11 +38,17 @@ async function waitForHealth(baseUrl: string, child: ChildProcess, log: () => st
   throw new Error(`The server did not become healthy:\n${log()}`);
 }
 
+/** Options of {@link startAppServer}. */
+export interface AppServerOptions {
+  /** Whether to load the invented demo teams and accounts (TALLUS_SEED_DEMO=1), as `npm start` does. */
+  isDemoSeeded?: boolean;
+}
+
 /**
  * Starts the real server (migrations, fake SMTP, built client) on a free port against the test database
  * that `npm test` provides through the TALLUS_DB_* variables.
  */
-export async function startAppServer(): Promise<AppServer> {
+export async function startAppServer(options: AppServerOptions = {}): Promise<AppServer> {
   const webDist = `${root}dist/web/browser`;
   if (!existsSync(`${webDist}/index.html`)) throw new Error('Build the client first: npx ng build web');
   const port = await findFreePort();
@@ -50,7 +56,15 @@ export async function startAppServer(): Promise<AppServer> {
   let output = '';
   const child = spawn(`${root}node_modules/.bin/tsx`, ['apps/api/src/main.ts'], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', WEB_DIST: webDist, PUBLIC_ORIGIN: baseUrl },
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      WEB_DIST: webDist,
+      PUBLIC_ORIGIN: baseUrl,
+      ...(options.isDemoSeeded ? { TALLUS_SEED_DEMO: '1' } : {}),
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout?.on('data', (chunk) => (output += String(chunk)));

@@ -8,7 +8,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
-import { Observable, of } from 'rxjs';
+import { Observable } from 'rxjs';
 
 import { AuthStore } from '../../auth/auth-store';
 import { describeProblem } from '../../core/error-messages';
@@ -78,13 +78,14 @@ export class ReviewPanel {
   protected readonly revisions = computed(() => [...(this.set()?.revisions ?? [])].sort((a, b) => b.number - a.number));
   protected readonly history = computed(() => [...(this.set()?.comments ?? [])].sort((a, b) => b.createdAt.localeCompare(a.createdAt)));
 
+  private readonly setId = computed(() => this.set()?.id ?? null);
   private readonly fromRevision = rxResource({
-    params: () => ({ setId: this.set()?.id, number: this.compareFrom() }),
-    stream: ({ params }) => (params.setId && params.number ? this.api.getRevision(params.setId, params.number) : of(null)),
+    params: () => revisionKey(this.setId(), this.compareFrom()),
+    stream: ({ params }) => this.api.getRevision(params.setId, params.number),
   });
   private readonly toRevision = rxResource({
-    params: () => ({ setId: this.set()?.id, number: this.compareTo() }),
-    stream: ({ params }) => (params.setId && params.number ? this.api.getRevision(params.setId, params.number) : of(null)),
+    params: () => revisionKey(this.setId(), this.compareTo()),
+    stream: ({ params }) => this.api.getRevision(params.setId, params.number),
   });
   protected readonly comparison = computed(() => {
     const from = this.fromRevision.value();
@@ -125,4 +126,9 @@ export class ReviewPanel {
       },
     });
   }
+}
+
+/** The revision to load, or undefined (nothing to load) for "the set as it is now" or no choice. */
+function revisionKey(setId: string | null, number: number | null): { setId: string; number: number } | undefined {
+  return setId && number ? { setId, number } : undefined;
 }
