@@ -14,7 +14,13 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: 'chem', include: ['libs/chem/**/*.spec.ts'], environment: 'node' },
+        test: {
+          name: 'chem',
+          include: ['libs/chem/**/*.spec.ts'],
+          environment: 'node',
+          // The property suites run thousands of cases; on a loaded 2-core machine 5 s is too tight.
+          testTimeout: 60_000,
+        },
       },
       {
         resolve: { alias },
