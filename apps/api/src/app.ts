@@ -4,7 +4,9 @@ import type { MikroORM } from '@mikro-orm/postgresql';
 import express, { type Express } from 'express';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
+import { activityRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
+import { chemRoutes } from './chem/routes';
 import { requireUser } from './auth/require-user';
 import type { Config } from './config/env';
 import { devRoutes, type OutboxSource } from './dev/routes';
@@ -14,6 +16,11 @@ import { errorHandler } from './http/error-handler';
 import { securityHeaders } from './http/security-headers';
 import { serveClient } from './http/serve-client';
 import { acceptInvitationRoutes, teamInvitationRoutes } from './invitations/routes';
+import { libraryRoutes } from './library/routes';
+import { reactionSetRoutes } from './reaction-sets/routes';
+import { reviewRoutes } from './review/routes';
+import { speciesRoutes } from './species/routes';
+import { transferRoutes } from './transfer/routes';
 import type { Mailer } from './mail/mailer';
 import { teamRoutes } from './teams/routes';
 
@@ -58,6 +65,14 @@ export function createApp(deps: AppDependencies): Express {
   api.use('/health', healthRoutes(em));
   api.use('/auth', authRoutes({ em, config, requireUser: authenticated }));
   api.use('/teams/:teamId/invitations', teamInvitationRoutes({ em, mailer, requireUser: authenticated, publicOrigin: config.publicOrigin }));
+  api.use('/teams/:teamId/activity', activityRoutes(em, authenticated));
+  api.use('/chem', chemRoutes(authenticated, config.chemRateLimitPerMinute));
+  // Routes with full paths under /api; each route carries its own requireUser, so unknown paths still answer 404.
+  api.use(speciesRoutes(em, authenticated));
+  api.use(transferRoutes(em, authenticated));
+  api.use(reactionSetRoutes(em, authenticated));
+  api.use(reviewRoutes({ em, mailer, requireUser: authenticated, publicOrigin: config.publicOrigin }));
+  api.use(libraryRoutes(em, authenticated));
   api.use('/teams', teamRoutes({ em, requireUser: authenticated }));
   api.use('/invitations', acceptInvitationRoutes({ em, requireUser: authenticated }));
   if (deps.outbox && config.nodeEnv !== 'production') api.use('/dev', devRoutes(deps.outbox, authenticated));

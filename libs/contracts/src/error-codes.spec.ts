@@ -9,7 +9,7 @@ describe('error codes', () => {
   });
 
   it.each([...ERROR_CODES])('When %s is a code, then it is SCREAMING_SNAKE and parses', (code) => {
-    expect(code).toMatch(/^[A-Z]+(_[A-Z]+)*$/);
+    expect(code).toMatch(/^[A-Z][A-Z0-9]*(_[A-Z0-9]+)*$/);
     expect(errorCodeSchema.parse(code)).toBe(code);
   });
 

@@ -20,9 +20,9 @@ export const reactionIdSchema = z.uuid();
  * The results the server computed with libs/chem when the reaction was last
  * saved, stored and read back as they are.
  *
- * - `mode: 'check'`: every term had a coefficient; the reaction was checked as
- *   written (`balanced` or `unbalanced`).
- * - `mode: 'balance'`: some coefficient was missing; the reaction was balanced
+ * - `mode: 'check'`: some coefficient was written; the reaction was checked as
+ *   written, a term without a coefficient counting 1 (`balanced` or `unbalanced`).
+ * - `mode: 'balance'`: no coefficient was written; the reaction was balanced
  *   (normalised to 1 mol of the reference species when one is named) and, when
  *   `balanced`, the balanced equation was checked. `open` (several independent
  *   balances: pin coefficients), `impossible` (no balance; `missing`), `invalid`.

@@ -39,6 +39,8 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(10),
   /** Length of the rate-limit window in minutes. Default 15. */
   AUTH_RATE_LIMIT_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  /** Requests per user per minute to the stateless `/api/chem/*` routes; 0 turns the limit off (the benchmark does). Default 600. */
+  CHEM_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(0).default(600),
   /** SMTP server for outgoing mail. When unset outside production, the API starts its own fake SMTP server on loopback. Required in production. */
   SMTP_HOST: z.string().min(1).optional(),
   /** SMTP port. With SMTP_HOST: default 587. For the fake server: its port (default 0, a free one). */
@@ -68,6 +70,8 @@ export interface Config {
   jwt: { secret: string; ttl: string };
   bcryptCost: number;
   authRateLimit: { max: number; windowMs: number };
+  /** Requests per user per minute to `/api/chem/*`; 0: no limit. */
+  chemRateLimitPerMinute: number;
   /** Real SMTP server; absent when the fake one should run. */
   smtp?: { host: string; port: number; user?: string; password?: string };
   /** Port of the fake SMTP server (0 = any free one). */
@@ -109,6 +113,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     jwt: { secret: values.JWT_SECRET ?? DEVELOPMENT_JWT_SECRET, ttl: values.JWT_TTL },
     bcryptCost: values.BCRYPT_COST,
     authRateLimit: { max: values.AUTH_RATE_LIMIT_MAX, windowMs: values.AUTH_RATE_LIMIT_WINDOW_MINUTES * 60_000 },
+    chemRateLimitPerMinute: values.CHEM_RATE_LIMIT_PER_MINUTE,
     smtp: values.SMTP_HOST
       ? { host: values.SMTP_HOST, port: values.SMTP_PORT ?? 587, user: values.SMTP_USER, password: values.SMTP_PASSWORD }
       : undefined,

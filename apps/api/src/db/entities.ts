@@ -1,8 +1,30 @@
+import { AuditEvent } from '../audit/audit-event.entity';
 import { RevokedToken } from '../auth/revoked-token.entity';
 import { Invitation } from '../invitations/invitation.entity';
+import { Publication } from '../library/publication.entity';
+import { NetReaction } from '../net-reactions/net-reaction.entity';
+import { ReactionSet } from '../reaction-sets/reaction-set.entity';
+import { Reaction } from '../reactions/reaction.entity';
+import { ReviewComment } from '../review/review-comment.entity';
+import { Revision } from '../review/revision.entity';
+import { Species } from '../species/species.entity';
 import { Membership } from '../teams/membership.entity';
 import { Team } from '../teams/team.entity';
 import { User } from '../users/user.entity';
 
 /** Every entity, listed explicitly (no folder discovery: bundles and tsx both see the same list). */
-export const ENTITIES = [User, Team, Membership, Invitation, RevokedToken];
+export const ENTITIES = [
+  User,
+  Team,
+  Membership,
+  Invitation,
+  RevokedToken,
+  Species,
+  ReactionSet,
+  Reaction,
+  NetReaction,
+  Revision,
+  ReviewComment,
+  Publication,
+  AuditEvent,
+];

@@ -1,5 +1,6 @@
 import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201222709 } from './migrations/Migration20261201222709';
+import { Migration20261201225409 } from './migrations/Migration20261201225409';
 
 /**
  * Every migration, in order. The CLI writes new files into ./migrations
@@ -9,4 +10,6 @@ import { Migration20261201222709 } from './migrations/Migration20261201222709';
 export const MIGRATIONS: MigrationObject[] = [
   // Accounts, teams, memberships, invitations, revoked session tokens.
   { name: 'Migration20261201222709', class: Migration20261201222709 },
+  // Species, reaction sets, reactions, net reactions, revisions, review comments, publications, audit events.
+  { name: 'Migration20261201225409', class: Migration20261201225409 },
 ];

@@ -37,6 +37,29 @@ export class RateLimitedError extends AppError {}
 /** A dependency such as the database does not answer (503). */
 export class ServiceUnavailableError extends AppError {}
 
+/** One problem of a request that failed a check beyond its schema: where (`path`) and what. */
+export interface RequestIssue {
+  code: string;
+  message: string;
+  path: Array<string | number>;
+  span?: { start: number; end: number };
+}
+
+/**
+ * The request is well-formed, but its content is wrong in ways the schema
+ * cannot see, e.g. a malformed import file or a net reaction naming a reaction of
+ * another set (400, with every issue and its path).
+ */
+export class BadRequestError extends AppError {
+  constructor(
+    code: ApiErrorCode,
+    detail: string,
+    readonly issues: RequestIssue[] = [],
+  ) {
+    super(code, detail);
+  }
+}
+
 /**
  * A chemistry error from libs/chem with the path of the request field whose
  * text it is about, e.g. `['reactions', 2, 'equation']` (422).

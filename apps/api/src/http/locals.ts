@@ -14,6 +14,8 @@ declare global {
       session?: SessionClaims;
       /** The caller's membership of `:teamId`, set by `requireTeamRole`. */
       membership?: Membership;
+      /** The id of the route's record (`:id`), set by `requireRecordRole` once the caller may act on it. */
+      recordId?: string;
     }
   }
 }
@@ -36,4 +38,14 @@ export function currentUser(res: Response): User {
 export function currentMembership(res: Response): Membership {
   if (!res.locals.membership) throw new Error('currentMembership() called on a route without requireTeamRole');
   return res.locals.membership;
+}
+
+/**
+ * The id of the route's record, behind `requireRecordRole`.
+ *
+ * @throws Error when the route forgot `requireRecordRole` (a bug, so a 500)
+ */
+export function currentRecordId(res: Response): string {
+  if (!res.locals.recordId) throw new Error('currentRecordId() called on a route without requireRecordRole');
+  return res.locals.recordId;
 }

@@ -1,10 +1,12 @@
-import { NotFoundError as OrmNotFoundError, UniqueConstraintViolationException } from '@mikro-orm/core';
+import { OptimisticLockError, NotFoundError as OrmNotFoundError, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { isChemError, type ChemError } from '@tallus/chem';
 import { problemTypeFor, type ErrorCode, type Problem, type ProblemIssue } from '@tallus/contracts';
+import { MulterError } from 'multer';
 import { ZodError } from 'zod';
 import {
   AppError,
   AuthenticationError,
+  BadRequestError,
   ChemInputError,
   ConflictError,
   ForbiddenError,
@@ -16,6 +18,7 @@ import {
 
 /** HTTP status and title of each kind of expected failure. */
 const APP_ERROR_STATUS: ReadonlyArray<[abstract new (...args: never[]) => AppError, number, string]> = [
+  [BadRequestError, 400, 'Bad Request'],
   [NotFoundError, 404, 'Not Found'],
   [AuthenticationError, 401, 'Unauthorized'],
   [ForbiddenError, 403, 'Forbidden'],
@@ -58,8 +61,12 @@ export function toProblem(error: unknown, requestId: string): Problem {
   }
   if (error instanceof AppError) {
     const [, status, title] = APP_ERROR_STATUS.find(([type]) => error instanceof type) ?? [AppError, 500, 'Internal Server Error'];
-    return problem(status, title, error.code, error.message);
+    return problem(status, title, error.code, error.message, error instanceof BadRequestError ? { issues: error.issues } : {});
   }
+  if (error instanceof OptimisticLockError) {
+    return problem(409, 'Conflict', 'VERSION_CONFLICT', 'The record changed while this request was handled; reload it and retry.');
+  }
+  if (error instanceof MulterError) return uploadProblem(error);
   if (error instanceof OrmNotFoundError) {
     return problem(404, 'Not Found', 'NOT_FOUND', 'No such resource.');
   }
@@ -68,6 +75,16 @@ export function toProblem(error: unknown, requestId: string): Problem {
   }
   return problem(500, 'Internal Server Error', 'INTERNAL_ERROR', 'The server failed to handle the request; quote the request id when reporting it.', {
     requestId,
+  });
+}
+
+/** A multipart upload that multer refused: too large (413) or not the expected field (400). */
+function uploadProblem(error: MulterError): Problem {
+  if (error.code === 'LIMIT_FILE_SIZE') {
+    return problem(413, 'Content Too Large', 'REQUEST_TOO_LARGE', 'The uploaded file is larger than the API accepts.');
+  }
+  return problem(400, 'Bad Request', 'REQUEST_INVALID', `The upload does not match the form: ${error.message}.`, {
+    issues: [{ code: error.code, message: error.message, path: error.field ? [error.field] : [] }],
   });
 }
 

@@ -1,0 +1,55 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import type { ReactionSetDetail, StatusCounts } from '@tallus/contracts';
+import { Publication } from '../library/publication.entity';
+import { NetReaction } from '../net-reactions/net-reaction.entity';
+import { toNetReactionView } from '../net-reactions/to-net-reaction-view';
+import { Reaction } from '../reactions/reaction.entity';
+import { toReactionView } from '../reactions/to-reaction-view';
+import { ReviewComment } from '../review/review-comment.entity';
+import { Revision } from '../review/revision.entity';
+import { toActor } from '../users/to-actor';
+import { ReactionSet } from './reaction-set.entity';
+import { emptyStatusCounts, toSetSummary } from './to-set-view';
+
+/**
+ * A set with its reactions and their stored results, its net reactions, review
+ * history and revisions: a fixed handful of queries whatever the size of the set
+ * (nothing is recomputed, no query per reaction).
+ *
+ * @param em an EntityManager (the request's, or a transaction's after a write)
+ * @param setId the set
+ * @throws NotFoundError (MikroORM's) when the set is gone
+ */
+export async function getReactionSet(em: EntityManager, setId: string): Promise<ReactionSetDetail> {
+  const set = await em.findOneOrFail(ReactionSet, setId, { populate: ['updatedBy', 'submittedBy'], refresh: true });
+  const [reactions, nets, comments, revisions] = await Promise.all([
+    em.find(Reaction, { set: setId }, { orderBy: { position: 'asc', id: 'asc' }, refresh: true }),
+    em.find(NetReaction, { set: setId }, { orderBy: { position: 'asc', createdAt: 'asc' }, refresh: true }),
+    em.find(ReviewComment, { set: setId }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] }),
+    em.find(Revision, { set: setId }, { orderBy: { number: 'desc' }, populate: ['vettedBy'] }),
+  ]);
+  const publications = revisions.length === 0 ? [] : await em.find(Publication, { revision: { $in: revisions.map((revision) => revision.id) } });
+  const publicationOf = new Map(publications.map((publication) => [publication.revision.id, publication.id]));
+  const counts: StatusCounts = emptyStatusCounts();
+  for (const reaction of reactions) counts[reaction.status]++;
+  return {
+    ...toSetSummary(set, counts),
+    reactions: reactions.map(toReactionView),
+    netReactions: nets.map(toNetReactionView),
+    comments: comments.map((comment) => ({
+      id: comment.id,
+      action: comment.action,
+      author: toActor(comment.author),
+      comment: comment.comment,
+      revision: comment.revision ?? null,
+      createdAt: comment.createdAt.toISOString(),
+    })),
+    revisions: revisions.map((revision) => ({
+      number: revision.number,
+      vettedBy: toActor(revision.vettedBy),
+      vettedAt: revision.vettedAt.toISOString(),
+      reactionCount: revision.reactionCount,
+      publicationId: publicationOf.get(revision.id) ?? null,
+    })),
+  };
+}
