@@ -33,9 +33,34 @@ describe('The demo seeder', () => {
 
     const second = await seedDemo(testApp.orm.em, 10);
 
-    expect(second).toEqual({ usersCreated: 0, teamsCreated: 0, membershipsCreated: 0 });
+    expect(second).toEqual({ usersCreated: 0, teamsCreated: 0, membershipsCreated: 0, reactionSetsCreated: 0 });
     expect(afterFirst).toEqual({ users: 8, memberships: 8, teams: 2 });
     expect(await countDemoRows(testApp)).toEqual(afterFirst);
+  });
+
+  it('When a demo user signs in, then Kestrel Flats has a vetted, published set and one under review, and Ironbark Creek a draft, all computed', async () => {
+    await seedDemo(testApp.orm.em, 10);
+    const signIn = async (email: string) =>
+      `Bearer ${(await request(testApp.app).post('/api/auth/login').send({ email, password: DEMO_PASSWORD }).expect(200)).body.token}`;
+    const kestrel = await signIn('viewer@kestrel.example');
+    const ironbark = await signIn('viewer@ironbark.example');
+    const teamOf = async (auth: string) => (await request(testApp.app).get('/api/auth/me').set('Authorization', auth)).body.memberships[0].teamId;
+
+    const kestrelSets = (await request(testApp.app).get(`/api/teams/${await teamOf(kestrel)}/reaction-sets`).set('Authorization', kestrel).expect(200)).body;
+    const ironbarkSets = (await request(testApp.app).get(`/api/teams/${await teamOf(ironbark)}/reaction-sets`).set('Authorization', ironbark).expect(200)).body;
+    const library = (await request(testApp.app).get('/api/library').set('Authorization', ironbark).expect(200)).body;
+
+    const states = (sets: Array<{ name: string; reviewState: string }>) => Object.fromEntries(sets.map((set) => [set.name, set.reviewState]));
+    expect(states(kestrelSets)).toEqual({
+      'Waste-rock sulfide oxidation (invented scenario)': 'vetted',
+      'Tailings pore-water neutralisation (invented scenario)': 'in_review',
+    });
+    expect(states(ironbarkSets)).toEqual({ 'Basalt field trial weathering (invented scenario)': 'draft' });
+    expect([...kestrelSets, ...ironbarkSets].every((set: { statusCounts: { balanced: number }; reactionCount: number }) => set.statusCounts.balanced === set.reactionCount)).toBe(true);
+    expect(library).toContainEqual(expect.objectContaining({ teamName: 'Kestrel Flats', setName: 'Waste-rock sulfide oxidation (invented scenario)', revision: 1 }));
+    const wasteRock = kestrelSets.find((set: { reviewState: string }) => set.reviewState === 'vetted');
+    const detail = (await request(testApp.app).get(`/api/reaction-sets/${wasteRock.id}`).set('Authorization', kestrel).expect(200)).body;
+    expect(detail.netReactions[0].result).toMatchObject({ status: 'combined', protonBudget: { perMole: '4' } });
   });
 
   it('When the demo has been changed, then seeding again keeps the change (a promoted viewer stays promoted)', async () => {

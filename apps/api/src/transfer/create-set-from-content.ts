@@ -24,7 +24,7 @@ export type SetContent = Omit<ReactionSetFile, 'format' | 'version' | 'exportedA
 export interface CreateSetTarget {
   teamId: string;
   actorId: string;
-  action: 'reaction_set.imported' | 'reaction_set.copied';
+  action: 'reaction_set.imported' | 'reaction_set.copied' | 'reaction_set.created';
   copiedFrom?: CopiedFrom;
 }
 
@@ -58,7 +58,9 @@ export async function createSetFromContent(tx: EntityManager, content: SetConten
     const result = computeNetResult({ members, equations, cancel: net.cancel, oxidationStates });
     tx.create(NetReaction, { id: randomUUID(), set: ref(set), position, name: net.name, members, cancel: net.cancel, status: result.status, result });
   });
-  const how = target.copiedFrom ? `copied from ${target.copiedFrom.teamName}'s library (revision ${target.copiedFrom.revision})` : 'imported from a file';
+  const how = target.copiedFrom
+    ? `copied from ${target.copiedFrom.teamName}'s library (revision ${target.copiedFrom.revision})`
+    : target.action === 'reaction_set.imported' ? 'imported from a file' : 'created';
   recordAudit(tx, { teamId: target.teamId, actorId: target.actorId, action: target.action, entityType: 'reaction_set', entityId: set.id, summary: `Reaction set "${set.name}" ${how}` });
   await tx.flush();
   return set.id;

@@ -4,16 +4,19 @@ import { Membership } from '../../teams/membership.entity';
 import { Team } from '../../teams/team.entity';
 import { User } from '../../users/user.entity';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_TEAMS } from './demo-accounts';
+import { seedDemoReactionSets } from './seed-demo-reaction-sets';
 
 /** What one seeding run added. */
 export interface DemoSeedResult {
   usersCreated: number;
   teamsCreated: number;
   membershipsCreated: number;
+  reactionSetsCreated: number;
 }
 
 /**
- * Loads the invented demo scenario (DESIGN.md §6), in one transaction.
+ * Loads the invented demo scenario (DESIGN.md §6): accounts, teams and
+ * memberships in one transaction, then the demo reaction sets.
  * Idempotent: only what is missing is added; existing accounts, teams and
  * memberships (also their passwords and roles, which the demo may have
  * changed) are left as they are. A team is found by its name among the teams
@@ -23,7 +26,7 @@ export interface DemoSeedResult {
  * @param bcryptCost cost of the password hash of new accounts
  */
 export async function seedDemo(em: EntityManager, bcryptCost: number): Promise<DemoSeedResult> {
-  const result: DemoSeedResult = { usersCreated: 0, teamsCreated: 0, membershipsCreated: 0 };
+  const result: DemoSeedResult = { usersCreated: 0, teamsCreated: 0, membershipsCreated: 0, reactionSetsCreated: 0 };
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, bcryptCost);
   await em.fork().transactional(async (tx) => {
     const users = new Map<string, User>();
@@ -55,5 +58,7 @@ export async function seedDemo(em: EntityManager, bcryptCost: number): Promise<D
       await tx.flush();
     }
   });
+  // After the accounts commit: the sets go through the review use cases, each step its own transaction.
+  result.reactionSetsCreated = await seedDemoReactionSets(em.fork());
   return result;
 }
