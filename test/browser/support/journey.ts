@@ -42,7 +42,16 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   // Let animations and the debounced check settle before the picture.
   await page.waitForTimeout(300);
-  await page.screenshot({ path: `${SCREENSHOT_DIR}${name}.png`, fullPage: true });
+  // The page scrolls inside the shell's content pane, so grow the window to the content for the picture.
+  const viewport = page.viewportSize() ?? { width: 1366, height: 900 };
+  const contentHeight = await page.evaluate(() => {
+    const pane = document.querySelector('mat-sidenav-content');
+    return pane ? pane.scrollHeight + 56 : document.body.scrollHeight;
+  });
+  const hasDialog = (await page.locator('mat-dialog-container').count()) > 0;
+  if (!hasDialog && contentHeight > viewport.height) await page.setViewportSize({ width: viewport.width, height: Math.min(contentHeight, 4000) });
+  await page.screenshot({ path: `${SCREENSHOT_DIR}${name}.png` });
+  await page.setViewportSize(viewport);
 }
 
 /**

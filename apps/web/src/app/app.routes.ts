@@ -56,6 +56,11 @@ export const routes: Routes = [
             loadComponent: () => import('./library/library-page/library-page').then((m) => m.LibraryPage),
           },
           {
+            path: 'mineral-formulas',
+            title: 'Mineral formulas · Tallus',
+            loadComponent: () => import('./mineral-formulas/formula-page/formula-page').then((m) => m.FormulaPage),
+          },
+          {
             path: 'members',
             title: 'Members · Tallus',
             loadComponent: () => import('./teams/members/members').then((m) => m.Members),

@@ -5,7 +5,7 @@ import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { ChemIssue } from '@tallus/chem';
-import { debounceTime, startWith, switchMap } from 'rxjs';
+import { debounceTime, map, startWith, switchMap } from 'rxjs';
 
 import { describeChemIssue, describeValidationErrors } from '../../core/error-messages';
 import { splitBySpan } from '../../core/split-by-span';
@@ -36,9 +36,17 @@ export class FormulaField {
     { initialValue: '' },
   );
 
+  /** The control's errors, followed as its status changes (validators and server problems alike). */
+  private readonly errors = toSignal(
+    toObservable(this.control).pipe(
+      switchMap((control) => control.statusChanges.pipe(startWith(control.status), map(() => control.errors))),
+    ),
+    { initialValue: null },
+  );
+
   protected readonly check = computed(() => checkFormula(this.text() ?? ''));
   protected readonly errorText = computed(() => {
-    const errors = this.control().errors;
+    const errors = this.errors();
     const issue = errors?.['formula'] as ChemIssue | undefined;
     return issue ? describeChemIssue(issue) : describeValidationErrors(errors);
   });

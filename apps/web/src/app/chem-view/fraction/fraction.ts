@@ -11,18 +11,7 @@ import { fractionParts } from './fraction-parts';
   selector: 'tl-fraction',
   template: `
     <span class="tl-visually-hidden">{{ parts().text }}</span>
-    <span class="shown" aria-hidden="true">
-      @if (parts().isNegative) {<span class="sign">−</span>}
-      @if (parts().denominator) {
-        @if (isSlashed()) {
-          <sup class="num">{{ parts().numerator }}</sup><span class="slash">⁄</span><sub class="den">{{ parts().denominator }}</sub>
-        } @else {
-          <span class="stack"><span class="num">{{ parts().numerator }}</span><span class="den">{{ parts().denominator }}</span></span>
-        }
-      } @else {
-        {{ parts().whole }}
-      }
-    </span>
+    <span class="shown" aria-hidden="true">@if (parts().isNegative) {<span class="sign">−</span>}@if (parts().denominator) {@if (isSlashed()) {<sup class="num">{{ parts().numerator }}</sup><span class="slash">⁄</span><sub class="den">{{ parts().denominator }}</sub>} @else {<span class="stack"><span class="num">{{ parts().numerator }}</span><span class="den">{{ parts().denominator }}</span></span>}} @else {<span>{{ parts().whole }}</span>}</span>
   `,
   styleUrl: './fraction.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -13,6 +13,7 @@ import type { TeamSummary } from '@tallus/contracts';
 import { BalanceStatus } from '../../chem-view/balance-status/balance-status';
 import { EquationView } from '../../chem-view/equation-view/equation-view';
 import { Fraction } from '../../chem-view/fraction/fraction';
+import { FormulaText } from '../../chem-view/formula-text/formula-text';
 import { describeProblem } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
@@ -23,7 +24,7 @@ import { LibraryApi } from '../library-api';
 /** The library: vetted sets that teams have published; preview one and copy it into one of my teams. */
 @Component({
   selector: 'tl-library-page',
-  imports: [BalanceStatus, DatePipe, EquationView, Fraction, MatButtonModule, MatFormFieldModule, MatIconModule, MatProgressBarModule, MatSelectModule],
+  imports: [BalanceStatus, DatePipe, EquationView, Fraction, FormulaText, MatButtonModule, MatFormFieldModule, MatIconModule, MatProgressBarModule, MatSelectModule],
   templateUrl: './library-page.html',
   styleUrl: './library-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

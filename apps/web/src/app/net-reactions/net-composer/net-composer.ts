@@ -10,6 +10,7 @@ import type { NetReaction, Reaction } from '@tallus/contracts';
 
 import { EquationView } from '../../chem-view/equation-view/equation-view';
 import { Fraction } from '../../chem-view/fraction/fraction';
+import { FormulaText } from '../../chem-view/formula-text/formula-text';
 import { describeChemIssue } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
@@ -31,7 +32,7 @@ const NET_STATUS_VIEWS: Readonly<Record<string, { label: string; icon: string; t
  */
 @Component({
   selector: 'tl-net-composer',
-  imports: [EquationView, Fraction, MatButtonModule, MatCheckboxModule, MatChipsModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
+  imports: [EquationView, Fraction, FormulaText, MatButtonModule, MatCheckboxModule, MatChipsModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
   templateUrl: './net-composer.html',
   styleUrl: './net-composer.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,6 +4,7 @@ import { BarController, BarElement, CategoryScale, ChartConfiguration, Legend, L
 import { BaseChartDirective, provideCharts } from 'ng2-charts';
 
 import { Fraction } from '../../chem-view/fraction/fraction';
+import { FormulaText } from '../../chem-view/formula-text/formula-text';
 import { ReactionSetStore } from '../../reaction-sets/reaction-set-store';
 import { protonBars } from './proton-chart-data';
 
@@ -17,7 +18,7 @@ const NET = '#934b14';
  */
 @Component({
   selector: 'tl-proton-chart',
-  imports: [BaseChartDirective, Fraction, MatIconModule],
+  imports: [BaseChartDirective, Fraction, FormulaText, MatIconModule],
   providers: [provideCharts({ registerables: [BarController, BarElement, CategoryScale, LinearScale, Tooltip, Legend] })],
   templateUrl: './proton-chart.html',
   styleUrl: './proton-chart.scss',

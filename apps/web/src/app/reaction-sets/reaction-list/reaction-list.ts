@@ -8,6 +8,7 @@ import type { Reaction } from '@tallus/contracts';
 import { BalanceStatus } from '../../chem-view/balance-status/balance-status';
 import { EquationView } from '../../chem-view/equation-view/equation-view';
 import { Fraction } from '../../chem-view/fraction/fraction';
+import { FormulaText } from '../../chem-view/formula-text/formula-text';
 import { reactionKindLabel } from '../reaction-editor/reaction-kinds';
 
 /** A move in the list: from one place to another (0-based). */
@@ -22,7 +23,7 @@ export interface ReactionMove {
  */
 @Component({
   selector: 'tl-reaction-list',
-  imports: [BalanceStatus, CdkDrag, CdkDragHandle, CdkDropList, EquationView, Fraction, MatButtonModule, MatIconModule, MatTooltipModule],
+  imports: [BalanceStatus, CdkDrag, CdkDragHandle, CdkDropList, EquationView, Fraction, FormulaText, MatButtonModule, MatIconModule, MatTooltipModule],
   templateUrl: './reaction-list.html',
   styleUrl: './reaction-list.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,10 +1,11 @@
-import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 
 import { BalanceStatus } from '../../chem-view/balance-status/balance-status';
 import { EquationView } from '../../chem-view/equation-view/equation-view';
+import { FigurePipe } from '../../chem-view/figure/figure';
 import { Fraction } from '../../chem-view/fraction/fraction';
+import { FormulaText } from '../../chem-view/formula-text/formula-text';
 import { describeChemIssue } from '../../core/error-messages';
 import { splitBySpan } from '../../core/split-by-span';
 import type { CheckView } from './check-reaction';
@@ -17,7 +18,7 @@ const OPTION_ERRORS = new Set(['BUDGET_UNKNOWN_REFERENCE', 'BALANCE_UNKNOWN_SPEC
  */
 @Component({
   selector: 'tl-reaction-check',
-  imports: [BalanceStatus, DecimalPipe, EquationView, Fraction, MatIconModule],
+  imports: [BalanceStatus, EquationView, FigurePipe, Fraction, FormulaText, MatIconModule],
   templateUrl: './reaction-check.html',
   styleUrl: './reaction-check.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

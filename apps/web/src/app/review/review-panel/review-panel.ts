@@ -79,8 +79,10 @@ export class ReviewPanel {
   protected readonly history = computed(() => [...(this.set()?.comments ?? [])].sort((a, b) => b.createdAt.localeCompare(a.createdAt)));
 
   private readonly setId = computed(() => this.set()?.id ?? null);
+  /** The older side of the comparison: the user's choice, else the latest revision. */
+  protected readonly effectiveFrom = computed(() => this.compareFrom() ?? this.latestRevision()?.number ?? null);
   private readonly fromRevision = rxResource({
-    params: () => revisionKey(this.setId(), this.compareFrom()),
+    params: () => revisionKey(this.setId(), this.effectiveFrom()),
     stream: ({ params }) => this.api.getRevision(params.setId, params.number),
   });
   private readonly toRevision = rxResource({

@@ -20,7 +20,7 @@ import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { SpeciesApi } from '../species-api';
 import { SpeciesDialog } from '../species-dialog/species-dialog';
-import { FormulaText } from './formula-text';
+import { FormulaText } from '../../chem-view/formula-text/formula-text';
 
 /** The team's species catalogue on top of the built-in one: sort, filter, page; add and edit the team's own. */
 @Component({

@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 
-import { checkFormula } from '../../chem-view/formula-field/formula-check';
+import { checkFormula } from '../formula-field/formula-check';
 
 /** A formula with real subscripts and charge; text that does not parse is shown as it is. */
 @Component({
