@@ -75,6 +75,24 @@ export const API_ERROR_CODES = [
   'PUBLISH_ALREADY_PUBLISHED',
   /** No such library publication (404). */
   'PUBLICATION_NOT_FOUND',
+  /** No such water analysis, or not in a team of the caller's (404). */
+  'WATER_ANALYSIS_NOT_FOUND',
+  /** The team already has a water analysis of that sample name (409). */
+  'WATER_ANALYSIS_DUPLICATE',
+  /** The water analysis is used by mass-balance models; delete or change them first (409). */
+  'WATER_ANALYSIS_IN_USE',
+  /** No such mass-balance model, or not in a team of the caller's (404). */
+  'MASS_BALANCE_MODEL_NOT_FOUND',
+  /** A model names a water analysis that is not in its team (400, with the path). */
+  'MASS_BALANCE_UNKNOWN_WATER',
+  /** A model phase names a species that is not in the team's or the built-in catalogue (400, with the path). */
+  'MASS_BALANCE_UNKNOWN_SPECIES',
+  /** No such rock sample, or not in a team of the caller's (404). */
+  'ROCK_SAMPLE_NOT_FOUND',
+  /** The team already has a rock sample of that name (409). */
+  'ROCK_SAMPLE_DUPLICATE',
+  /** The weathering reaction of a recalculated formula does not balance, so it cannot be added to a set (409). */
+  'MINERAL_FORMULA_NO_REACTION',
   /** The import file is malformed; `issues` lists every problem with its path (400). Nothing was saved. */
   'IMPORT_INVALID',
   /** Too many computation requests; retry later (429). */

@@ -25,3 +25,13 @@ export * from './reaction-sets';
 export * from './review';
 export * from './library';
 export * from './import-export';
+
+// Site data (issues 6 and 7)
+export * from './csv-import';
+export * from './team-settings';
+export * from './water-analyses';
+export * from './mass-balance';
+export * from './rock-samples';
+export * from './mineral-formulas';
+export * from './site-chem';
+export * from './reports';
