@@ -8,7 +8,19 @@ export const actorSchema = z.object({
 export type Actor = z.infer<typeof actorSchema>;
 
 /** Kinds of records an audit event is about. */
-export const AUDIT_ENTITY_TYPES = ['species', 'reaction_set', 'reaction', 'net_reaction', 'revision', 'publication'] as const;
+export const AUDIT_ENTITY_TYPES = [
+  'species',
+  'reaction_set',
+  'reaction',
+  'net_reaction',
+  'revision',
+  'publication',
+  'team_settings',
+  'water_analysis',
+  'mass_balance_model',
+  'rock_sample',
+  'mineral_formula',
+] as const;
 export const auditEntityTypeSchema = z.enum(AUDIT_ENTITY_TYPES);
 
 /**

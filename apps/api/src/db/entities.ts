@@ -11,6 +11,11 @@ import { Species } from '../species/species.entity';
 import { Membership } from '../teams/membership.entity';
 import { Team } from '../teams/team.entity';
 import { User } from '../users/user.entity';
+import { TeamSettings } from '../team-settings/team-settings.entity';
+import { WaterAnalysis } from '../water-analyses/water-analysis.entity';
+import { MassBalanceModel } from '../mass-balance/mass-balance-model.entity';
+import { RockSample } from '../rock-samples/rock-sample.entity';
+import { MineralFormula } from '../mineral-formulas/mineral-formula.entity';
 
 /** Every entity, listed explicitly (no folder discovery: bundles and tsx both see the same list). */
 export const ENTITIES = [
@@ -27,4 +32,9 @@ export const ENTITIES = [
   ReviewComment,
   Publication,
   AuditEvent,
+  TeamSettings,
+  WaterAnalysis,
+  MassBalanceModel,
+  RockSample,
+  MineralFormula,
 ];

@@ -1,6 +1,7 @@
 import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201222709 } from './migrations/Migration20261201222709';
 import { Migration20261201225409 } from './migrations/Migration20261201225409';
+import { Migration20261201233038 } from './migrations/Migration20261201233038';
 
 /**
  * Every migration, in order. The CLI writes new files into ./migrations
@@ -12,4 +13,6 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201222709', class: Migration20261201222709 },
   // Species, reaction sets, reactions, net reactions, revisions, review comments, publications, audit events.
   { name: 'Migration20261201225409', class: Migration20261201225409 },
+  // Team settings, water analyses, mass-balance models, rock samples, mineral formulas; audit entity types for them.
+  { name: 'Migration20261201233038', class: Migration20261201233038 },
 ];
