@@ -55,6 +55,8 @@ describe('A geochemist writes, checks, combines and shares a reaction set', () =
     const { page } = editor;
     await page.getByRole('button', { name: 'Add reaction', exact: true }).click();
     await page.getByLabel('Name', { exact: true }).fill('K-feldspar to kaolinite');
+    await page.getByLabel('Kind').click();
+    await page.getByRole('option', { name: 'alteration' }).click();
     await page.getByLabel('Equation', { exact: true }).fill(FELDSPAR_TYPED);
     const status = page.locator('tl-reaction-check tl-balance-status');
     await expect.poll(() => status.getAttribute('data-status')).toBe('unbalanced');
@@ -84,6 +86,8 @@ describe('A geochemist writes, checks, combines and shares a reaction set', () =
     ]) {
       await page.getByRole('button', { name: 'Add reaction', exact: true }).click();
       await page.getByLabel('Name', { exact: true }).fill(name);
+      await page.getByLabel('Kind').click();
+      await page.getByRole('option', { name: 'oxidation', exact: true }).click();
       await page.getByLabel('Equation', { exact: true }).fill(equation);
       await expect.poll(() => page.locator('tl-reaction-check tl-balance-status').getAttribute('data-status')).toBe('balanced');
       await page.getByRole('button', { name: 'Add reaction', exact: true }).click();

@@ -56,6 +56,16 @@ export const routes: Routes = [
             loadComponent: () => import('./library/library-page/library-page').then((m) => m.LibraryPage),
           },
           {
+            path: 'water-analyses',
+            title: 'Water analyses · Tallus',
+            loadComponent: () => import('./water/water-list/water-list').then((m) => m.WaterList),
+          },
+          {
+            path: 'water-analyses/:analysisId',
+            title: 'Water analysis · Tallus',
+            loadComponent: () => import('./water/water-editor/water-editor').then((m) => m.WaterEditor),
+          },
+          {
             path: 'mineral-formulas',
             title: 'Mineral formulas · Tallus',
             loadComponent: () => import('./mineral-formulas/formula-page/formula-page').then((m) => m.FormulaPage),

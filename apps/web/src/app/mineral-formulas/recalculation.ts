@@ -10,7 +10,7 @@ import {
   type WeatheringProducts,
 } from '@tallus/chem';
 
-import { describeChemIssue } from '../../core/error-messages';
+import { describeChemIssue } from '../core/error-messages';
 
 /** What the user entered: oxide weight percents and the basis of the formula. */
 export interface OxideInput {

@@ -11,6 +11,7 @@ export const TEAM_SECTIONS: readonly TeamSection[] = [
   { path: '', label: 'Reaction sets', icon: 'science' },
   { path: 'species', label: 'Species catalogue', icon: 'hexagon' },
   { path: 'library', label: 'Library', icon: 'local_library' },
+  { path: 'water-analyses', label: 'Water analyses', icon: 'water_drop' },
   { path: 'mineral-formulas', label: 'Mineral formulas', icon: 'diamond' },
   { path: 'members', label: 'Members', icon: 'group' },
 ];

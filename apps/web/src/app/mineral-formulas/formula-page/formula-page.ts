@@ -20,11 +20,12 @@ import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { ReactionSetsApi } from '../../reaction-sets/reaction-sets-api';
 import { ScreeningCaution } from '../../site-data/screening-caution/screening-caution';
-import { SpeciesApi } from '../../species/species-api';
+import { saveBlob } from '../../site-data/save-file';
 import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { readPastedOxides, type PasteProblem } from '../oxide-paste';
 import { createOxideForm, EXAMPLES, GROUP_OPTIONS, MAIN_OXIDES, MORE_OXIDES, oxideInputOf } from '../oxide-form/oxide-form';
+import { MineralFormulasApi } from '../mineral-formulas-api';
 import { recalculate } from '../recalculation';
 
 /**
@@ -56,7 +57,7 @@ import { recalculate } from '../recalculation';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class FormulaPage {
-  private readonly speciesApi = inject(SpeciesApi);
+  private readonly api = inject(MineralFormulasApi);
   private readonly setsApi = inject(ReactionSetsApi);
   private readonly teamStore = inject(TeamStore);
   private readonly notifier = inject(Notifier);
@@ -86,6 +87,10 @@ export class FormulaPage {
     const team = this.teamStore.currentTeam();
     return team ? hasRoleAtLeast(team.role, 'editor') : false;
   });
+  protected readonly saved = rxResource({
+    params: () => this.teamId(),
+    stream: ({ params: teamId }) => this.api.list(teamId),
+  });
   protected readonly draftSets = rxResource({
     params: () => (this.canWrite() ? this.teamId() : undefined),
     stream: ({ params: teamId }) => this.setsApi.listSets(teamId, 'draft'),
@@ -113,37 +118,37 @@ export class FormulaPage {
     this.source.set('');
   }
 
-  protected saveSpecies(): void {
+  protected save(): void {
     const view = this.view();
     if (view.status !== 'done') return;
     const value = this.form.getRawValue();
     const name = value.name.trim() || `Mineral ${view.formula}`;
-    this.isSaving.set(true);
-    this.speciesApi.create(this.teamId(), { name, formula: view.formula, phase: 'mineral', source: this.provenance(view.result.oxygens), notes: this.analysisNote() }).subscribe({
-      next: (saved) => {
-        this.isSaving.set(false);
-        this.notifier.success(`Species “${saved.name}” added to the catalogue.`);
-      },
-      error: (error: unknown) => {
-        this.isSaving.set(false);
-        this.notifier.problem(toProblem(error));
-      },
-    });
-  }
-
-  protected addReaction(): void {
-    const view = this.view();
     const setId = this.targetSetId();
-    if (view.status !== 'done' || !view.weathering.equation || !setId) return;
-    const name = this.form.getRawValue().name.trim() || view.formula;
     const target = this.draftSets.value()?.find((set) => set.id === setId);
+    const group = value.group || undefined;
     this.isSaving.set(true);
-    this.setsApi
-      .createReaction(setId, { name: `${name} weathering`, kind: 'alteration', equation: view.weathering.equation, reference: view.formula, citation: this.provenance(view.result.oxygens), notes: this.analysisNote() })
+    this.api
+      .save(this.teamId(), {
+        name,
+        sampleName: this.source(),
+        notes: this.analysisNote(),
+        decimals: 2,
+        analysis: {
+          oxides: Object.fromEntries(Object.entries(value.oxides).filter((entry): entry is [string, number] => typeof entry[1] === 'number' && entry[1] !== 0)),
+          oxygens: view.result.oxygens,
+          ...(group ? { group } : {}),
+          ...(value.isDroop ? { ferric: 'droop' as const } : {}),
+        },
+        products: { aluminium: value.aluminium, iron: value.iron },
+        reactionSetId: setId,
+        ...(setId ? { reactionName: `${name} weathering` } : {}),
+      })
       .subscribe({
-        next: () => {
+        next: (saved) => {
           this.isSaving.set(false);
-          this.notifier.success(`Weathering reaction added to “${target?.name ?? 'the set'}”.`);
+          const into = saved.reaction && target ? `, its weathering reaction added to “${target.name}”` : '';
+          this.notifier.success(`Species “${saved.species.name}” added to the catalogue${into}.`);
+          this.saved.reload();
         },
         error: (error: unknown) => {
           this.isSaving.set(false);
@@ -152,11 +157,17 @@ export class FormulaPage {
       });
   }
 
-  private provenance(oxygens: number): string {
-    const value = this.form.getRawValue();
-    const ferric = value.isDroop ? 'Fe3+ estimated after Droop (1987)' : 'all Fe as Fe2+ unless analysed';
-    const origin = this.source() ? `; ${this.source()}` : '';
-    return `Recalculated from oxide wt% on ${oxygens} O (${value.group || 'no group'}), ${ferric}; Brady & Perkins (SERC) method${origin}`;
+  protected download(): void {
+    this.api.exportCsv(this.teamId()).subscribe({
+      next: (blob) => saveBlob(blob, 'mineral-formulas.csv'),
+      error: (error: unknown) => this.notifier.problem(toProblem(error)),
+    });
+  }
+
+  protected endMemberText(members: Readonly<Record<string, number>> | undefined): string {
+    if (!members) return '–';
+    const parts = (['An', 'Fo', 'mgNumber'] as const).filter((key) => members[key] !== undefined).map((key) => `${key === 'mgNumber' ? 'Mg#' : key} ${(members[key] * 100).toFixed(1)}`);
+    return parts.join(' · ') || '–';
   }
 
   private analysisNote(): string {
