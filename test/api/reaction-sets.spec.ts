@@ -1,6 +1,7 @@
 import { checkEquation, checkToJson, combineReactions, combineToJson } from '@tallus/chem';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { getReactionSet } from '../../apps/api/src/reaction-sets/get-reaction-set';
 import { addReaction, createSet, PUBLISHED } from './support/reaction-sets';
 import { createTeam, registerUser, startTestApp, type SignedInUser, type TestApp } from './support/test-app';
 
@@ -36,6 +37,18 @@ describe('Reaction sets, reactions and net reactions', () => {
     expect(stored.electrons).toEqual({ byElement: engine.electrons, transferred: engine.electronsTransferred, o2Demand: engine.o2Demand });
     expect(stored.protonBudget.perMole).toBe('2');
     expect(reaction.result).toEqual(stored);
+  });
+
+  it('When a set is read over HTTP (reactions serialised by PostgreSQL), then the answer equals the object form of the use case', async () => {
+    const setId = await createSet(testApp.app, owner, teamId);
+    await addReaction(testApp.app, owner, setId, { name: 'R20', equation: PUBLISHED.ferrousToHydroxide });
+    await addReaction(testApp.app, owner, setId, { name: 'open', equation: 'FeS2 + O2 -> Fe^2+ + SO4^2- + H+ + Fe^3+ + H2O' });
+    await addReaction(testApp.app, owner, setId, { name: 'typo', equation: 'Ca2+ -> Ca' });
+
+    const overHttp = (await send('get', `/api/reaction-sets/${setId}`).expect(200)).body;
+
+    expect(overHttp).toEqual(await getReactionSet(testApp.orm.em.fork(), setId));
+    expect(overHttp.statusCounts).toEqual({ balanced: 1, unbalanced: 0, open: 1, impossible: 0, invalid: 1 });
   });
 
   it('When an equation does not parse, then the reaction is saved with status invalid, its text kept, and the error with its span', async () => {

@@ -3,7 +3,7 @@ import type { RequestHandler } from 'express';
 import { AuthenticationError } from '../errors/app-errors';
 import { User } from '../users/user.entity';
 import { RevokedToken } from './revoked-token.entity';
-import { verifySessionToken } from './session-token';
+import { sessionKey, verifySessionToken } from './session-token';
 
 /**
  * Middleware that admits only requests with a valid `Authorization: Bearer`
@@ -15,10 +15,11 @@ import { verifySessionToken } from './session-token';
  * @throws AuthenticationError AUTH_REQUIRED without a token, AUTH_INVALID_TOKEN with a bad one
  */
 export function requireUser(em: EntityManager, secret: string): RequestHandler {
+  const key = sessionKey(secret);
   return async (req, res, next) => {
     const token = bearerToken(req.headers.authorization);
     if (!token) throw new AuthenticationError('AUTH_REQUIRED', 'Sign in first: send Authorization: Bearer <token>.');
-    const claims = verifySessionToken(token, secret);
+    const claims = verifySessionToken(token, key);
     const [user, revoked] = await Promise.all([
       em.findOne(User, { id: claims.userId }),
       em.count(RevokedToken, { jti: claims.tokenId }),

@@ -3,8 +3,9 @@ import type { ReactionSetDetail, StatusCounts } from '@tallus/contracts';
 import { Publication } from '../library/publication.entity';
 import { NetReaction } from '../net-reactions/net-reaction.entity';
 import { toNetReactionView } from '../net-reactions/to-net-reaction-view';
-import { Reaction } from '../reactions/reaction.entity';
-import { toReactionView } from '../reactions/to-reaction-view';
+import { readReactionsJson } from '../reactions/read-reactions-json';
+import { readReactionViews } from '../reactions/read-reaction-views';
+import { countStatuses } from './count-statuses';
 import { ReviewComment } from '../review/review-comment.entity';
 import { Revision } from '../review/revision.entity';
 import { toActor } from '../users/to-actor';
@@ -20,10 +21,10 @@ import { emptyStatusCounts, toSetSummary } from './to-set-view';
  * @param setId the set
  * @throws NotFoundError (MikroORM's) when the set is gone
  */
-export async function getReactionSet(em: EntityManager, setId: string): Promise<ReactionSetDetail> {
+export async function getReactionSet(em: EntityManager, setId: string, options: { withReactions: boolean } = { withReactions: true }): Promise<ReactionSetDetail> {
   const set = await em.findOneOrFail(ReactionSet, setId, { populate: ['updatedBy', 'submittedBy'], refresh: true });
   const [reactions, nets, comments, revisions] = await Promise.all([
-    em.find(Reaction, { set: setId }, { orderBy: { position: 'asc', id: 'asc' }, refresh: true }),
+    options.withReactions ? readReactionViews(em, setId) : Promise.resolve([]),
     em.find(NetReaction, { set: setId }, { orderBy: { position: 'asc', createdAt: 'asc' }, refresh: true }),
     em.find(ReviewComment, { set: setId }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] }),
     em.find(Revision, { set: setId }, { orderBy: { number: 'desc' }, populate: ['vettedBy'] }),
@@ -31,10 +32,10 @@ export async function getReactionSet(em: EntityManager, setId: string): Promise<
   const publications = revisions.length === 0 ? [] : await em.find(Publication, { revision: { $in: revisions.map((revision) => revision.id) } });
   const publicationOf = new Map(publications.map((publication) => [publication.revision.id, publication.id]));
   const counts: StatusCounts = emptyStatusCounts();
-  for (const reaction of reactions) counts[reaction.status]++;
+  for (const reaction of reactions) counts[reaction.result.status]++;
   return {
     ...toSetSummary(set, counts),
-    reactions: reactions.map(toReactionView),
+    reactions,
     netReactions: nets.map(toNetReactionView),
     comments: comments.map((comment) => ({
       id: comment.id,
@@ -52,4 +53,26 @@ export async function getReactionSet(em: EntityManager, setId: string): Promise<
       publicationId: publicationOf.get(revision.id) ?? null,
     })),
   };
+}
+
+/** Stands in for the reactions array while the rest of the answer is serialised. */
+const REACTIONS_SLOT = '"__tallus_reactions__"';
+
+/**
+ * The JSON text of {@link getReactionSet}'s answer, for `GET /api/reaction-sets/:id`: the
+ * reactions array comes as text from PostgreSQL ({@link readReactionsJson}) and is spliced into
+ * the serialised rest, so a large set is neither parsed nor re-serialised in Node.
+ */
+export async function getReactionSetJson(em: EntityManager, setId: string): Promise<string> {
+  const [detail, reactions, counts] = await Promise.all([getReactionSetWithout(em, setId), readReactionsJson(em, setId), countStatuses(em, [setId])]);
+  const statusCounts = counts.get(setId)!;
+  const reactionCount = Object.values(statusCounts).reduce((sum, count) => sum + count, 0);
+  const text = JSON.stringify({ ...detail, reactionCount, statusCounts, reactions: JSON.parse(REACTIONS_SLOT) as string });
+  return text.replace(REACTIONS_SLOT, () => reactions);
+}
+
+/** {@link getReactionSet} without reading the reactions. */
+async function getReactionSetWithout(em: EntityManager, setId: string): Promise<Omit<ReactionSetDetail, 'reactions'>> {
+  const { reactions: _reactions, ...rest } = await getReactionSet(em, setId, { withReactions: false });
+  return rest;
 }

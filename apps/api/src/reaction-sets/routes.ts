@@ -17,7 +17,7 @@ import { reorderReactions } from '../reactions/reorder-reactions';
 import { createReaction, deleteReaction, updateReaction } from '../reactions/save-reaction';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
-import { getReactionSet } from './get-reaction-set';
+import { getReactionSetJson } from './get-reaction-set';
 import { listReactionSets } from './list-reaction-sets';
 import { createReactionSet, deleteReactionSet, updateReactionSet } from './save-reaction-set';
 
@@ -46,7 +46,7 @@ export function reactionSetRoutes(em: EntityManager, requireUser: RequestHandler
   });
 
   router.get('/reaction-sets/:id', requireUser, asSet('viewer'), async (_req, res) => {
-    res.json(await getReactionSet(em, currentRecordId(res)));
+    res.type('application/json').send(await getReactionSetJson(em, currentRecordId(res)));
   });
 
   router.patch('/reaction-sets/:id', requireUser, asSet('editor'), async (req, res) => {
