@@ -29,7 +29,8 @@ describe('A new user sets up a team and invites a colleague', () => {
     await page.getByLabel('Password').fill('a-long-test-password');
     await page.getByRole('button', { name: 'Create account' }).click();
 
-    await expect.poll(() => page.getByText('Rowan Tester').first().isVisible()).toBe(true);
+    // Registration hashes the password (bcrypt) and loads the shell's chunk: allow more than the default second.
+    await expect.poll(() => page.getByText('Rowan Tester').first().isVisible(), { timeout: 10_000 }).toBe(true);
   });
 
   it('When they create a team, then they are its owner', async () => {
