@@ -3,6 +3,7 @@ import {
   formulaText,
   isChemError,
   mineralCo2Uptake,
+  OXIDE_WARNINGS,
   recalculateFormula,
   weatheringEquation,
   type FormulaRecalculation,
@@ -81,12 +82,15 @@ export function recalculate(input: OxideInput): RecalculationView {
   const oxygens = input.oxygens ?? group?.oxygens ?? null;
   if (oxygens === null) return { status: 'invalid', message: 'Choose a mineral group or give the number of oxygens of the formula.', field: 'oxygens' };
   try {
-    const result = recalculateFormula({
+    // Droop needs a fixed cation total; groups with vacancies (micas) have none: say so rather than fail.
+    const isDroopImpossible = input.isDroop && group !== undefined && group.cations === null;
+    const recalculated = recalculateFormula({
       oxides,
       oxygens,
       ...(input.group ? { group: input.group } : {}),
-      ...(input.isDroop ? { ferric: 'droop' as const, ...(group?.cations ? { cations: group.cations } : {}) } : {}),
+      ...(input.isDroop && !isDroopImpossible ? { ferric: 'droop' as const, ...(group?.cations ? { cations: group.cations } : {}) } : {}),
     });
+    const result = isDroopImpossible ? { ...recalculated, warnings: [...recalculated.warnings, OXIDE_WARNINGS.DROOP_NOT_APPLICABLE] } : recalculated;
     const formula = formulaText(result.apfu, { oxygens: result.oxygens });
     return { status: 'done', result, formula, rows: apfuRows(result), endMembers: endMemberRows(result), weathering: weatheringOf(formula, input.products), co2: co2Of(formula) };
   } catch (error) {
