@@ -1,0 +1,112 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatTooltipModule } from '@angular/material/tooltip';
+import { ABA_NOTES } from '@tallus/chem';
+import type { RockSample } from '@tallus/contracts';
+
+import { FigurePipe } from '../../chem-view/figure/figure';
+import { describeProblem } from '../../core/error-messages';
+import { Notifier } from '../../core/notifier';
+import { toProblem } from '../../core/problem';
+import { ReportButton } from '../../reports/report-button/report-button';
+import { CsvImportDialog, type CsvImportDialogData } from '../../site-data/csv-import-dialog/csv-import-dialog';
+import { saveBlob } from '../../site-data/save-file';
+import { ScreeningCaution } from '../../site-data/screening-caution/screening-caution';
+import { TeamSettingsApi } from '../../site-data/team-settings-api';
+import { hasRoleAtLeast } from '../../teams/roles';
+import { TeamStore } from '../../teams/team-store';
+import { abaClassView } from '../aba-class-view';
+import { BandSettings } from '../band-settings/band-settings';
+import { NpApPlot } from '../np-ap-plot/np-ap-plot';
+import { npApPoints } from '../np-ap-plot/np-ap-points';
+import { RockSamplesApi } from '../rock-samples-api';
+import { SampleDetail } from '../sample-detail/sample-detail';
+
+/** Short words for the per-sample flags. */
+const FLAG_WORDS: Readonly<Partial<Record<string, string>>> = {
+  ACID_PASTE_PH: 'paste pH below 4',
+  INTERVAL_REVERSED: 'depths reversed',
+  SULFUR_FORMS_EXCEED_TOTAL: 'S forms exceed total S',
+};
+
+/** Rock samples with acid-base accounting, the NP-vs-AP plot, CO2 uptake and the team's bands. */
+@Component({
+  selector: 'tl-rock-samples-page',
+  imports: [BandSettings, FigurePipe, MatButtonModule, MatIconModule, MatProgressBarModule, MatTooltipModule, NpApPlot, ReportButton, SampleDetail, ScreeningCaution],
+  templateUrl: './rock-samples-page.html',
+  styleUrl: './rock-samples-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RockSamplesPage {
+  private readonly api = inject(RockSamplesApi);
+  private readonly settingsApi = inject(TeamSettingsApi);
+  private readonly teamStore = inject(TeamStore);
+  private readonly dialog = inject(MatDialog);
+  private readonly notifier = inject(Notifier);
+
+  readonly teamId = input.required<string>();
+
+  protected readonly samples = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
+  protected readonly settings = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.settingsApi.get(teamId) });
+  protected readonly selectedId = signal<string | null>(null);
+  protected readonly selected = computed(() => this.samples.value()?.find((sample) => sample.id === this.selectedId()) ?? null);
+  protected readonly points = computed(() => npApPoints(this.samples.value() ?? []));
+  protected readonly bands = computed(() => this.settings.value()?.nprBands ?? { acidGenerating: 1, nonAcidGenerating: 3 });
+  protected readonly sites = computed(() => [...new Set((this.samples.value() ?? []).map((sample) => sample.site).filter((site) => site !== ''))]);
+  protected readonly totalSulfurCount = computed(() => (this.samples.value() ?? []).filter((sample) => sample.aba?.sulfurBasis === 'total').length);
+  protected readonly canWrite = computed(() => {
+    const team = this.teamStore.currentTeam();
+    return team ? hasRoleAtLeast(team.role, 'editor') : false;
+  });
+  protected readonly isOwner = this.teamStore.isOwner;
+  protected readonly loadError = computed(() => {
+    const error = this.samples.error();
+    return error ? describeProblem(toProblem(error)) : null;
+  });
+  protected readonly abaNotes = [ABA_NOTES.SCREENING_ONLY];
+  protected readonly flagWords = FLAG_WORDS;
+
+  protected classOf(sample: RockSample) {
+    return sample.aba ? abaClassView(sample.aba.classification) : null;
+  }
+
+  protected toggle(sample: RockSample): void {
+    this.selectedId.set(this.selectedId() === sample.id ? null : sample.id);
+  }
+
+  protected upload(): void {
+    const data: CsvImportDialogData = {
+      title: 'Upload rock samples',
+      layout: 'One row per sample: sample, site, depth_from_m, depth_to_m, lithology, total_s_pct, sulfide_s_pct, sulfate_s_pct, np_kg_caco3_t, paste_ph, notes; optional mode:<mineral> and oxide:<oxide> columns in wt%.',
+      things: 'rock samples',
+      preview: (file) => this.api.preview(this.teamId(), file),
+      save: (file, skipInvalid) => this.api.import(this.teamId(), file, skipInvalid),
+      downloadTemplate: () => this.download('template'),
+    };
+    this.dialog
+      .open(CsvImportDialog, { data, width: '760px' })
+      .afterClosed()
+      .subscribe((count: number | undefined) => {
+        if (count === undefined) return;
+        this.notifier.success(`${count} rock samples saved.`);
+        this.samples.reload();
+      });
+  }
+
+  protected download(kind: 'export' | 'template'): void {
+    const call = kind === 'export' ? this.api.exportCsv(this.teamId()) : this.api.templateCsv(this.teamId());
+    call.subscribe({
+      next: (blob) => saveBlob(blob, kind === 'export' ? 'rock-samples-aba.csv' : 'rock-samples-template.csv'),
+      error: (error: unknown) => this.notifier.problem(toProblem(error)),
+    });
+  }
+
+  protected settingsSaved(): void {
+    this.settings.reload();
+    this.samples.reload();
+  }
+}
