@@ -66,9 +66,29 @@ export const routes: Routes = [
             loadComponent: () => import('./water/water-editor/water-editor').then((m) => m.WaterEditor),
           },
           {
+            path: 'mass-balance',
+            title: 'Mass-balance models · Tallus',
+            loadComponent: () => import('./mass-balance/model-list/model-list').then((m) => m.ModelList),
+          },
+          {
+            path: 'mass-balance/:modelId',
+            title: 'Mass-balance model · Tallus',
+            loadComponent: () => import('./mass-balance/model-editor/model-editor').then((m) => m.ModelEditor),
+          },
+          {
             path: 'mineral-formulas',
             title: 'Mineral formulas · Tallus',
             loadComponent: () => import('./mineral-formulas/formula-page/formula-page').then((m) => m.FormulaPage),
+          },
+          {
+            path: 'rock-samples',
+            title: 'Rock samples · Tallus',
+            loadComponent: () => import('./rock-samples/rock-samples-page/rock-samples-page').then((m) => m.RockSamplesPage),
+          },
+          {
+            path: 'reports',
+            title: 'Reports · Tallus',
+            loadComponent: () => import('./reports/reports-page/reports-page').then((m) => m.ReportsPage),
           },
           {
             path: 'members',

@@ -12,6 +12,9 @@ export const TEAM_SECTIONS: readonly TeamSection[] = [
   { path: 'species', label: 'Species catalogue', icon: 'hexagon' },
   { path: 'library', label: 'Library', icon: 'local_library' },
   { path: 'water-analyses', label: 'Water analyses', icon: 'water_drop' },
+  { path: 'mass-balance', label: 'Mass balance', icon: 'account_tree' },
+  { path: 'rock-samples', label: 'Rock samples', icon: 'landslide' },
   { path: 'mineral-formulas', label: 'Mineral formulas', icon: 'diamond' },
+  { path: 'reports', label: 'Reports', icon: 'picture_as_pdf' },
   { path: 'members', label: 'Members', icon: 'group' },
 ];
