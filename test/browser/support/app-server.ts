@@ -63,6 +63,9 @@ export async function startAppServer(options: AppServerOptions = {}): Promise<Ap
       HOST: '127.0.0.1',
       WEB_DIST: webDist,
       PUBLIC_ORIGIN: baseUrl,
+      // The lowest cost the API accepts: journeys register and sign in often, and hashing at the
+      // production cost on a loaded machine made those steps slow enough to time out.
+      BCRYPT_COST: '10',
       ...(options.isDemoSeeded ? { TALLUS_SEED_DEMO: '1' } : {}),
     },
     stdio: ['ignore', 'pipe', 'pipe'],
