@@ -23,6 +23,9 @@ import { speciesRoutes } from './species/routes';
 import { transferRoutes } from './transfer/routes';
 import type { Mailer } from './mail/mailer';
 import { teamRoutes } from './teams/routes';
+import { teamSettingsRoutes } from './team-settings/routes';
+import { waterAnalysisRoutes } from './water-analyses/routes';
+import { massBalanceRoutes } from './mass-balance/routes';
 
 /** Everything the app needs from outside; main.ts and the tests build these. */
 export interface AppDependencies {
@@ -73,6 +76,10 @@ export function createApp(deps: AppDependencies): Express {
   api.use(reactionSetRoutes(em, authenticated));
   api.use(reviewRoutes({ em, mailer, requireUser: authenticated, publicOrigin: config.publicOrigin }));
   api.use(libraryRoutes(em, authenticated));
+  // Site data (issues 6 and 7).
+  api.use(teamSettingsRoutes(em, authenticated));
+  api.use(waterAnalysisRoutes(em, authenticated));
+  api.use(massBalanceRoutes(em, authenticated));
   api.use('/teams', teamRoutes({ em, requireUser: authenticated }));
   api.use('/invitations', acceptInvitationRoutes({ em, requireUser: authenticated }));
   if (deps.outbox && config.nodeEnv !== 'production') api.use('/dev', devRoutes(deps.outbox, authenticated));
