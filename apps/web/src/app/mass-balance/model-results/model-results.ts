@@ -53,6 +53,6 @@ export class ModelResults {
 
   protected residualText(residuals: Readonly<Record<string, number>> | undefined): string {
     if (!residuals) return '';
-    return Object.entries(residuals).filter(([, value]) => Math.abs(value) > 1e-12).map(([key, value]) => `${key} ${value.toPrecision(3)}`).join(', ');
+    return Object.entries(residuals).filter(([, value]) => Math.abs(value) > 1e-12).map(([key, value]) => `${key} ${value.toPrecision(3).replace('-', '−')}`).join(', ');
   }
 }

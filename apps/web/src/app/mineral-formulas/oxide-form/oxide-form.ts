@@ -11,7 +11,7 @@ export const MORE_OXIDES = ['V2O3', 'NiO', 'ZnO', 'SrO', 'BaO', 'Li2O', 'F', 'Cl
 /** Screen names of the mineral groups, with their default basis. */
 export const GROUP_OPTIONS = MINERAL_GROUPS.map((group) => ({
   key: group.key,
-  label: `${group.key[0].toUpperCase()}${group.key.slice(1)} (${group.oxygens} O${group.cations ? `, ${group.cations} cations` : ''})`,
+  label: `${group.key[0].toUpperCase()}${group.key.slice(1)} (${group.oxygens} O)`,
   oxygens: group.oxygens,
 }));
 

@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
-import { ChartConfiguration, Legend, LinearScale, LineElement, LogarithmicScale, PointElement, ScatterController, Tooltip } from 'chart.js';
+import { ChartConfiguration, Legend, LinearScale, LineController, LineElement, LogarithmicScale, PointElement, ScatterController, Tooltip } from 'chart.js';
 import { BaseChartDirective, provideCharts } from 'ng2-charts';
 
 import { ABA_CLASS_VIEWS, abaClassView } from '../aba-class-view';
@@ -15,7 +15,7 @@ const BAND_COLOURS = ['#a23e2a', '#4f6b4f'];
 @Component({
   selector: 'tl-np-ap-plot',
   imports: [BaseChartDirective, MatButtonToggleModule],
-  providers: [provideCharts({ registerables: [ScatterController, PointElement, LineElement, LinearScale, LogarithmicScale, Tooltip, Legend] })],
+  providers: [provideCharts({ registerables: [ScatterController, LineController, PointElement, LineElement, LinearScale, LogarithmicScale, Tooltip, Legend] })],
   template: `<div class="bar">
       <mat-button-toggle-group [value]="scale()" (change)="scale.set($event.value)" aria-label="Axes" hideSingleSelectionIndicator>
         <mat-button-toggle value="linear">Linear axes</mat-button-toggle>

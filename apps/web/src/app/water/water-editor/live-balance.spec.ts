@@ -11,7 +11,7 @@ describe('liveBalance', () => {
       ],
       options,
     );
-    expect(live.rows.map((row) => [row.key, row.mmolPerL, row.meqPerL])).toEqual([
+    expect(live.rows.map((row) => [row?.key, row?.mmolPerL, row?.meqPerL])).toEqual([
       ['Ca', expect.closeTo(1, 6), expect.closeTo(2, 6)],
       ['alkalinity', expect.closeTo(2, 3), expect.closeTo(2, 3)],
     ]);
@@ -32,6 +32,12 @@ describe('liveBalance', () => {
     expect(live.balance?.notes.map((note) => note.code)).toContain('BELOW_DETECTION');
   });
 
+  it('keeps one entry per typed row, empty rows included, so each row shows its own conversion', () => {
+    const live = liveBalance([{ key: 'Mg', value: '', unit: 'mg/L' }, { key: 'Na', value: '<0.5', unit: 'mg/L' }], options);
+    expect(live.rows[0]).toBeNull();
+    expect(live.rows[1]).toMatchObject({ key: 'Na', isBelowDetection: true });
+  });
+
   it('flags an imbalance beyond the threshold and says what is wrong with an unreadable row', () => {
     const live = liveBalance(
       [
@@ -42,6 +48,6 @@ describe('liveBalance', () => {
       options,
     );
     expect(live.balance?.flagged).toBe(true);
-    expect(live.rows[2].error).toBeTruthy();
+    expect(live.rows[2]?.error).toBeTruthy();
   });
 });

@@ -33,7 +33,8 @@ export interface SoluteRowView {
 
 /** The charge balance computed as the user types, or why it cannot be. */
 export interface LiveBalance {
-  rows: SoluteRowView[];
+  /** One entry per input row, in the same order; null for a row without solute or value. */
+  rows: (SoluteRowView | null)[];
   balance: ChargeBalanceResult | null;
 }
 
@@ -46,10 +47,13 @@ export interface LiveBalance {
  * @param options pH (adds H+ below 4.5), the team's threshold (%) and convention
  */
 export function liveBalance(rows: readonly SoluteRowInput[], options: { pH: number | null; threshold: number; convention: ChargeBalanceConvention }): LiveBalance {
-  const views: SoluteRowView[] = [];
+  const views: (SoluteRowView | null)[] = [];
   const solutes: Record<string, { value: string; unit: string }> = {};
   for (const row of rows) {
-    if (row.key === '' || row.value.trim() === '') continue;
+    if (row.key === '' || row.value.trim() === '') {
+      views.push(null);
+      continue;
+    }
     const view = convertRow(row);
     views.push(view);
     if (view.error === null && solutes[row.key] === undefined) solutes[row.key] = { value: row.value.trim(), unit: row.unit };
@@ -61,7 +65,7 @@ export function liveBalance(rows: readonly SoluteRowInput[], options: { pH: numb
     if (!isChemError(error)) throw error;
     // Two rows for one quantity (HCO3 and alkalinity): the rows already say which; no balance until fixed.
     const field = String(error.details?.field ?? '');
-    const culprit = views.find((view) => field.includes(view.key));
+    const culprit = views.find((view) => view !== null && field.includes(view.key));
     if (culprit) culprit.error = describeChemIssue(error.toIssue());
   }
   return { rows: views, balance };
