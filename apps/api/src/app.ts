@@ -26,6 +26,8 @@ import { teamRoutes } from './teams/routes';
 import { teamSettingsRoutes } from './team-settings/routes';
 import { waterAnalysisRoutes } from './water-analyses/routes';
 import { massBalanceRoutes } from './mass-balance/routes';
+import { rockSampleRoutes } from './rock-samples/routes';
+import { mineralFormulaRoutes } from './mineral-formulas/routes';
 
 /** Everything the app needs from outside; main.ts and the tests build these. */
 export interface AppDependencies {
@@ -80,6 +82,8 @@ export function createApp(deps: AppDependencies): Express {
   api.use(teamSettingsRoutes(em, authenticated));
   api.use(waterAnalysisRoutes(em, authenticated));
   api.use(massBalanceRoutes(em, authenticated));
+  api.use(rockSampleRoutes(em, authenticated));
+  api.use(mineralFormulaRoutes(em, authenticated));
   api.use('/teams', teamRoutes({ em, requireUser: authenticated }));
   api.use('/invitations', acceptInvitationRoutes({ em, requireUser: authenticated }));
   if (deps.outbox && config.nodeEnv !== 'production') api.use('/dev', devRoutes(deps.outbox, authenticated));

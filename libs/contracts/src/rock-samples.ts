@@ -46,7 +46,7 @@ export const createRockSampleRequestSchema = z.object({
   sulfideSulfurPercent: percentSchema.nullable().default(null),
   sulfateSulfurPercent: percentSchema.nullable().default(null),
   /** Measured NP, kg CaCO3/t. */
-  neutralisationPotential: z.number().min(-1_000).max(2_000).nullable().default(null),
+  neutralisationPotential: z.number().min(0).max(2_000).nullable().default(null),
   pastePh: z.number().min(0).max(14).nullable().default(null),
   modes: z.array(mineralModeSchema).max(40).default([]),
   /** Oxide weight percents by libs/chem oxide key (`SiO2`, `CaO`, `MgO`, `Na2O`, `K2O`, `CO2`, `SO3`, …). */
@@ -66,7 +66,7 @@ export const updateRockSampleRequestSchema = z.object({
   totalSulfurPercent: percentSchema.nullable().optional(),
   sulfideSulfurPercent: percentSchema.nullable().optional(),
   sulfateSulfurPercent: percentSchema.nullable().optional(),
-  neutralisationPotential: z.number().min(-1_000).max(2_000).nullable().optional(),
+  neutralisationPotential: z.number().min(0).max(2_000).nullable().optional(),
   pastePh: z.number().min(0).max(14).nullable().optional(),
   modes: z.array(mineralModeSchema).max(40).optional(),
   oxides: z.record(z.string().min(1).max(10), percentSchema).nullable().optional(),
