@@ -19,6 +19,12 @@ const messagesByCode: Readonly<Record<string, string>> = {
   INVITATION_WRONG_USER:
     'This invitation was sent to another e-mail address. Sign in with that address to accept it.',
   INVITATION_ALREADY_MEMBER: 'This person is a member of the team already.',
+  WATER_ANALYSIS_DUPLICATE: 'The team has a water analysis of this sample name already. Give the sample another name, or open the existing one.',
+  WATER_ANALYSIS_IN_USE: 'Mass-balance models use this water analysis. Change or delete those models first.',
+  ROCK_SAMPLE_DUPLICATE: 'The team has a rock sample of this name already. Give the sample another name.',
+  MASS_BALANCE_UNKNOWN_WATER: 'The chosen water analysis no longer exists in this team. Choose another water.',
+  MASS_BALANCE_UNKNOWN_SPECIES: 'A candidate phase names a species that is not in the catalogue any more. Choose another species.',
+  MINERAL_FORMULA_NO_REACTION: 'The weathering reaction of this formula does not balance, so it cannot be added to a reaction set. Save the species alone, or change the products.',
 };
 
 /**

@@ -155,6 +155,8 @@ export class ModelEditor {
   private fail(error: unknown): void {
     this.isBusy.set(null);
     const problem = toProblem(error);
-    if (!showProblemAtFields(this.form, problem)) this.notifier.problem(problem);
+    // The API names a phase's `formula` or `equation`; the form keeps both in one `text` field.
+    const issues = problem.issues?.map((issue) => ({ ...issue, path: issue.path.map((part) => (part === 'formula' || part === 'equation' ? 'text' : part)) }));
+    if (!showProblemAtFields(this.form, { ...problem, ...(issues ? { issues } : {}) })) this.notifier.problem(problem);
   }
 }
