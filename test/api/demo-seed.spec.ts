@@ -33,7 +33,7 @@ describe('The demo seeder', () => {
 
     const second = await seedDemo(testApp.orm.em, 10);
 
-    expect(second).toEqual({ usersCreated: 0, teamsCreated: 0, membershipsCreated: 0, reactionSetsCreated: 0 });
+    expect(second).toEqual({ usersCreated: 0, teamsCreated: 0, membershipsCreated: 0, reactionSetsCreated: 0, siteRecordsCreated: 0 });
     expect(afterFirst).toEqual({ users: 8, memberships: 8, teams: 2 });
     expect(await countDemoRows(testApp)).toEqual(afterFirst);
   });

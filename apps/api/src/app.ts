@@ -28,6 +28,7 @@ import { waterAnalysisRoutes } from './water-analyses/routes';
 import { massBalanceRoutes } from './mass-balance/routes';
 import { rockSampleRoutes } from './rock-samples/routes';
 import { mineralFormulaRoutes } from './mineral-formulas/routes';
+import { reportRoutes } from './reports/routes';
 
 /** Everything the app needs from outside; main.ts and the tests build these. */
 export interface AppDependencies {
@@ -84,6 +85,7 @@ export function createApp(deps: AppDependencies): Express {
   api.use(massBalanceRoutes(em, authenticated));
   api.use(rockSampleRoutes(em, authenticated));
   api.use(mineralFormulaRoutes(em, authenticated));
+  api.use(reportRoutes(em, authenticated));
   api.use('/teams', teamRoutes({ em, requireUser: authenticated }));
   api.use('/invitations', acceptInvitationRoutes({ em, requireUser: authenticated }));
   if (deps.outbox && config.nodeEnv !== 'production') api.use('/dev', devRoutes(deps.outbox, authenticated));

@@ -41,7 +41,8 @@ function headerIssuesOf(columns: CsvColumn[], found: CsvIssue[]): CsvIssue[] {
   const seen = new Map<string, string>();
   const issues = [...found];
   for (const column of columns) {
-    const identity = column.kind === 'value' ? `solute:${column.key}` : column.kind === 'field' && column.key ? `field:${column.key}` : null;
+    // One solute may have a column per unit (the export writes them so); a row may fill only one of them.
+    const identity = column.kind === 'value' ? `solute:${column.key}:${column.unit}` : column.kind === 'field' && column.key ? `field:${column.key}` : null;
     if (identity === null) continue;
     if (seen.has(identity)) issues.push({ code: 'CSV_DUPLICATE_COLUMN', message: `"${column.header}" gives the same ${column.kind === 'value' ? 'solute' : 'column'} as "${seen.get(identity)}".`, line: 1, column: column.header });
     else seen.set(identity, column.header);
@@ -76,6 +77,10 @@ function readRow(columns: CsvColumn[], cells: readonly string[], line: number): 
     const text = cells[column.index] ?? '';
     if (column.kind === 'field') readFixed(column, text, line, fields, issues);
     if (column.kind !== 'value' || text.trim() === '') continue;
+    if (solutes[column.key!]) {
+      issues.push({ code: 'CSV_BAD_VALUE', message: `${column.key} is given twice in this row (${solutes[column.key!].unit} and ${column.unit}).`, line, column: column.header });
+      continue;
+    }
     try {
       parseConcentration(text.trim());
       solutes[column.key!] = { value: text.trim(), unit: column.unit! };

@@ -5,6 +5,7 @@ import { Team } from '../../teams/team.entity';
 import { User } from '../../users/user.entity';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_TEAMS } from './demo-accounts';
 import { seedDemoReactionSets } from './seed-demo-reaction-sets';
+import { seedDemoSiteData } from './seed-demo-site-data';
 
 /** What one seeding run added. */
 export interface DemoSeedResult {
@@ -12,6 +13,8 @@ export interface DemoSeedResult {
   teamsCreated: number;
   membershipsCreated: number;
   reactionSetsCreated: number;
+  /** Water analyses, rock samples, mass-balance models and mineral formulas added. */
+  siteRecordsCreated: number;
 }
 
 /**
@@ -26,7 +29,7 @@ export interface DemoSeedResult {
  * @param bcryptCost cost of the password hash of new accounts
  */
 export async function seedDemo(em: EntityManager, bcryptCost: number): Promise<DemoSeedResult> {
-  const result: DemoSeedResult = { usersCreated: 0, teamsCreated: 0, membershipsCreated: 0, reactionSetsCreated: 0 };
+  const result: DemoSeedResult = { usersCreated: 0, teamsCreated: 0, membershipsCreated: 0, reactionSetsCreated: 0, siteRecordsCreated: 0 };
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, bcryptCost);
   await em.fork().transactional(async (tx) => {
     const users = new Map<string, User>();
@@ -60,5 +63,6 @@ export async function seedDemo(em: EntityManager, bcryptCost: number): Promise<D
   });
   // After the accounts commit: the sets go through the review use cases, each step its own transaction.
   result.reactionSetsCreated = await seedDemoReactionSets(em.fork());
+  result.siteRecordsCreated = await seedDemoSiteData(em.fork());
   return result;
 }

@@ -11,7 +11,7 @@ const config = loadConfig();
 const orm = await openDatabase(config);
 const result = await seedDemo(orm.em, config.bcryptCost);
 console.log(
-  `Demo data in ${config.database.name}: ${result.usersCreated} users, ${result.teamsCreated} teams, ${result.membershipsCreated} memberships, ${result.reactionSetsCreated} reaction sets added.`,
+  `Demo data in ${config.database.name}: ${result.usersCreated} users, ${result.teamsCreated} teams, ${result.membershipsCreated} memberships, ${result.reactionSetsCreated} reaction sets, ${result.siteRecordsCreated} site records added.`,
 );
 console.log(`Sign in with any of these (password ${DEMO_PASSWORD}):`);
 for (const account of DEMO_ACCOUNTS) console.log(`  ${account.team.padEnd(15)} ${account.role.padEnd(9)} ${account.email}`);
