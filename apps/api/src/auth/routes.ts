@@ -11,6 +11,7 @@ import { registerUser } from './register-user';
 import { bearerToken } from './require-user';
 import { issueSessionToken, verifySessionToken } from './session-token';
 import { signIn } from './sign-in';
+import type { SessionCache } from './session-cache';
 import { signOut } from './sign-out';
 import type { RequestHandler } from 'express';
 import type { User } from '../users/user.entity';
@@ -20,10 +21,12 @@ export interface AuthRoutesDependencies {
   em: EntityManager;
   config: Config;
   requireUser: RequestHandler;
+  /** The app's session cache, told at sign-out to stop trusting the token. */
+  sessions: SessionCache;
 }
 
 /** `/api/auth`: register, login, logout, me. */
-export function authRoutes({ em, config, requireUser }: AuthRoutesDependencies): Router {
+export function authRoutes({ em, config, requireUser, sessions }: AuthRoutesDependencies): Router {
   const router = Router();
   const session = (user: User): AuthSession => ({ token: issueSessionToken(user.id, config.jwt), user: toUserView(user) });
 
@@ -41,7 +44,10 @@ export function authRoutes({ em, config, requireUser }: AuthRoutesDependencies):
   router.post('/logout', async (req, res) => {
     const token = bearerToken(req.headers.authorization);
     const claims = token ? tryVerify(token, config.jwt.secret) : undefined;
-    if (claims) await signOut(em, claims);
+    if (claims) {
+      sessions.forget(claims.tokenId);
+      await signOut(em, claims);
+    }
     res.status(204).end();
   });
 

@@ -39,6 +39,8 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(10),
   /** Length of the rate-limit window in minutes. Default 15. */
   AUTH_RATE_LIMIT_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  /** Seconds a checked session token is trusted without the database look-ups; sign-out in the same process ends it at once. 0 turns the cache off. Default 30. */
+  SESSION_CACHE_SECONDS: z.coerce.number().int().min(0).max(300).default(30),
   /** Requests per user per minute to the stateless `/api/chem/*` routes; 0 turns the limit off (the benchmark does). Default 600. */
   CHEM_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(0).default(600),
   /** SMTP server for outgoing mail. When unset outside production, the API starts its own fake SMTP server on loopback. Required in production. */
@@ -72,6 +74,8 @@ export interface Config {
   authRateLimit: { max: number; windowMs: number };
   /** Requests per user per minute to `/api/chem/*`; 0: no limit. */
   chemRateLimitPerMinute: number;
+  /** How long (ms) a checked session token is trusted without database look-ups; 0: always look up. */
+  sessionCacheMs: number;
   /** Real SMTP server; absent when the fake one should run. */
   smtp?: { host: string; port: number; user?: string; password?: string };
   /** Port of the fake SMTP server (0 = any free one). */
@@ -114,6 +118,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     bcryptCost: values.BCRYPT_COST,
     authRateLimit: { max: values.AUTH_RATE_LIMIT_MAX, windowMs: values.AUTH_RATE_LIMIT_WINDOW_MINUTES * 60_000 },
     chemRateLimitPerMinute: values.CHEM_RATE_LIMIT_PER_MINUTE,
+    sessionCacheMs: values.SESSION_CACHE_SECONDS * 1000,
     smtp: values.SMTP_HOST
       ? { host: values.SMTP_HOST, port: values.SMTP_PORT ?? 587, user: values.SMTP_USER, password: values.SMTP_PASSWORD }
       : undefined,
