@@ -8,6 +8,7 @@ import { activityRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
 import { chemRoutes } from './chem/routes';
 import { requireUser } from './auth/require-user';
+import { SessionCache } from './auth/session-cache';
 import type { Config } from './config/env';
 import { devRoutes, type OutboxSource } from './dev/routes';
 import { NotFoundError } from './errors/app-errors';
@@ -48,7 +49,8 @@ export interface AppDependencies {
 export function createApp(deps: AppDependencies): Express {
   const { config, orm, mailer, logger } = deps;
   const em = orm.em;
-  const authenticated = requireUser(em, config.jwt.secret);
+  const sessions = new SessionCache(config.sessionCacheMs);
+  const authenticated = requireUser(em, config.jwt.secret, sessions);
   const app = express();
   app.disable('x-powered-by');
   app.use(securityHeaders());
@@ -69,7 +71,7 @@ export function createApp(deps: AppDependencies): Express {
 
   const api = express.Router();
   api.use('/health', healthRoutes(em));
-  api.use('/auth', authRoutes({ em, config, requireUser: authenticated }));
+  api.use('/auth', authRoutes({ em, config, requireUser: authenticated, sessions }));
   api.use('/teams/:teamId/invitations', teamInvitationRoutes({ em, mailer, requireUser: authenticated, publicOrigin: config.publicOrigin }));
   api.use('/teams/:teamId/activity', activityRoutes(em, authenticated));
   api.use('/chem', chemRoutes(authenticated, config.chemRateLimitPerMinute));
