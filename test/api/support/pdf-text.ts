@@ -29,14 +29,15 @@ function readObjects(pdf: Buffer): Map<number, PdfObject> {
 /** Glyph code (hex) → text, from a ToUnicode CMap (bfchar and bfrange with arrays or a start value). */
 function readCmap(cmap: string): Map<string, string> {
   const map = new Map<string, string>();
-  const unicode = (hex: string) => String.fromCodePoint(...(hex.match(/.{4}/g) ?? []).map((unit) => parseInt(unit, 16)));
+  // Targets may hold several code units separated by spaces (ligatures: <0066 0066 0069> is "ffi").
+  const unicode = (hex: string) => String.fromCodePoint(...(hex.replace(/\s+/g, '').match(/.{4}/g) ?? []).map((unit) => parseInt(unit, 16)));
   for (const block of cmap.matchAll(/beginbfchar([\s\S]*?)endbfchar/g)) {
     for (const [, code, target] of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>/g)) map.set(code.toLowerCase(), unicode(target));
   }
   for (const block of cmap.matchAll(/beginbfrange([\s\S]*?)endbfrange/g)) {
-    for (const [, from, to, rest] of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>\s*(\[[^\]]*\]|<[0-9a-fA-F]+>)/g)) {
+    for (const [, from, to, rest] of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>\s*(\[[^\]]*\]|<[0-9a-fA-F\s]+>)/g)) {
       const first = parseInt(from, 16);
-      const targets = rest.startsWith('[') ? [...rest.matchAll(/<([0-9a-fA-F]+)>/g)].map((entry) => entry[1]) : null;
+      const targets = rest.startsWith('[') ? [...rest.matchAll(/<([0-9a-fA-F\s]+)>/g)].map((entry) => entry[1]) : null;
       for (let code = first; code <= parseInt(to, 16); code++) {
         const key = code.toString(16).padStart(from.length, '0');
         const target = targets ? targets[code - first] : (parseInt(rest.slice(1, -1), 16) + code - first).toString(16).padStart(4, '0');

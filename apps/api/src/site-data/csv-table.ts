@@ -16,7 +16,8 @@ export interface CsvTable {
 export function readCsvTable(buffer: Buffer): CsvTable | { issues: CsvIssue[] } {
   const text = buffer.toString('utf8').replace(/^\uFEFF/, '');
   const parsed = Papa.parse<string[]>(text, { skipEmptyLines: false });
-  const fatal = parsed.errors.filter((error) => error.type === 'Quotes' || error.type === 'Delimiter' && text.includes('\n'));
+  // An undetectable delimiter (a one-column file) falls back to the comma: only broken quoting is fatal.
+  const fatal = parsed.errors.filter((error) => error.type === 'Quotes');
   if (fatal.length > 0) {
     return { issues: fatal.map((error) => ({ code: 'CSV_PARSE', message: error.message, line: (error.row ?? -1) + 1, column: null })) };
   }
