@@ -51,6 +51,26 @@ describe('Reaction sets, reactions and net reactions', () => {
     expect(overHttp.statusCounts).toEqual({ balanced: 1, unbalanced: 0, open: 1, impossible: 0, invalid: 1 });
   });
 
+  it('When a read set is changed (edit, reorder, delete), then the next read shows the change, not the cached reactions', async () => {
+    const setId = await createSet(testApp.app, owner, teamId);
+    const first = await addReaction(testApp.app, owner, setId, { name: 'R20', equation: PUBLISHED.ferrousToHydroxide });
+    await addReaction(testApp.app, owner, setId, { name: 'R15', equation: PUBLISHED.pyriteToFerrous });
+    const read = async () => (await send('get', `/api/reaction-sets/${setId}`).expect(200)).body;
+    await read();
+
+    await send('patch', `/api/reactions/${first.reaction.id}`, { name: 'R20 renamed', version: first.reaction.version }).expect(200);
+    expect((await read()).reactions.map((reaction: { name: string }) => reaction.name)).toEqual(['R20 renamed', 'R15']);
+
+    const ids = (await read()).reactions.map((reaction: { id: string }) => reaction.id);
+    await send('post', `/api/reaction-sets/${setId}/reorder`, { reactionIds: [...ids].reverse() }).expect(200);
+    expect((await read()).reactions.map((reaction: { name: string }) => reaction.name)).toEqual(['R15', 'R20 renamed']);
+
+    await send('delete', `/api/reactions/${first.reaction.id}`).expect(200);
+    const after = await read();
+    expect(after.reactions.map((reaction: { name: string }) => reaction.name)).toEqual(['R15']);
+    expect(after.reactionCount).toBe(1);
+  });
+
   it('When an equation does not parse, then the reaction is saved with status invalid, its text kept, and the error with its span', async () => {
     const setId = await createSet(testApp.app, owner, teamId);
 

@@ -1,11 +1,12 @@
+import { NotFoundError } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { ReactionSetDetail, StatusCounts } from '@tallus/contracts';
 import { Publication } from '../library/publication.entity';
 import { NetReaction } from '../net-reactions/net-reaction.entity';
 import { toNetReactionView } from '../net-reactions/to-net-reaction-view';
+import type { ReactionsJsonCache } from '../reactions/reactions-json-cache';
 import { readReactionsJson } from '../reactions/read-reactions-json';
 import { readReactionViews } from '../reactions/read-reaction-views';
-import { countStatuses } from './count-statuses';
 import { ReviewComment } from '../review/review-comment.entity';
 import { Revision } from '../review/revision.entity';
 import { toActor } from '../users/to-actor';
@@ -60,15 +61,25 @@ const REACTIONS_SLOT = '"__tallus_reactions__"';
 
 /**
  * The JSON text of {@link getReactionSet}'s answer, for `GET /api/reaction-sets/:id`: the
- * reactions array comes as text from PostgreSQL ({@link readReactionsJson}) and is spliced into
- * the serialised rest, so a large set is neither parsed nor re-serialised in Node.
+ * reactions array comes as text from PostgreSQL ({@link readReactionsJson}), or from the cache when
+ * the set's version has not changed since, and is spliced into the serialised rest, so a large set
+ * is neither parsed nor re-serialised in Node.
+ *
+ * @throws NotFoundError (MikroORM's) when the set is gone
  */
-export async function getReactionSetJson(em: EntityManager, setId: string): Promise<string> {
-  const [detail, reactions, counts] = await Promise.all([getReactionSetWithout(em, setId), readReactionsJson(em, setId), countStatuses(em, [setId])]);
-  const statusCounts = counts.get(setId)!;
+export async function getReactionSetJson(em: EntityManager, setId: string, cache: ReactionsJsonCache): Promise<string> {
+  const detail = await getReactionSetWithout(em, setId);
+  let reactions = cache.find(setId, detail.version);
+  if (!reactions) {
+    reactions = await readReactionsJson(em, setId);
+    if (!reactions) throw NotFoundError.findOneFailed('ReactionSet', { id: setId });
+    cache.store(setId, reactions);
+  }
+  const statusCounts: StatusCounts = { ...emptyStatusCounts(), ...reactions.counts };
   const reactionCount = Object.values(statusCounts).reduce((sum, count) => sum + count, 0);
   const text = JSON.stringify({ ...detail, reactionCount, statusCounts, reactions: JSON.parse(REACTIONS_SLOT) as string });
-  return text.replace(REACTIONS_SLOT, () => reactions);
+  const reactionsText = reactions.reactions;
+  return text.replace(REACTIONS_SLOT, () => reactionsText);
 }
 
 /** {@link getReactionSet} without reading the reactions. */

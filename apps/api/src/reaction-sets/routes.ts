@@ -13,6 +13,7 @@ import { Router, type RequestHandler } from 'express';
 import { currentMembership, currentRecordId, currentUser } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { createNetReaction, deleteNetReaction, updateNetReaction } from '../net-reactions/save-net-reaction';
+import { ReactionsJsonCache } from '../reactions/reactions-json-cache';
 import { reorderReactions } from '../reactions/reorder-reactions';
 import { createReaction, deleteReaction, updateReaction } from '../reactions/save-reaction';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
@@ -30,6 +31,8 @@ import { createReactionSet, deleteReactionSet, updateReactionSet } from './save-
  */
 export function reactionSetRoutes(em: EntityManager, requireUser: RequestHandler): Router {
   const router = Router();
+  // The reactions JSON of recently read sets, valid for one set version each.
+  const reactionsCache = new ReactionsJsonCache();
   const asSet = (role: 'viewer' | 'editor') => requireRecordRole(em, RECORD_KINDS.reactionSet, role);
   const asReaction = requireRecordRole(em, RECORD_KINDS.reaction, 'editor');
   const asNet = requireRecordRole(em, RECORD_KINDS.netReaction, 'editor');
@@ -46,7 +49,7 @@ export function reactionSetRoutes(em: EntityManager, requireUser: RequestHandler
   });
 
   router.get('/reaction-sets/:id', requireUser, asSet('viewer'), async (_req, res) => {
-    res.type('application/json').send(await getReactionSetJson(em, currentRecordId(res)));
+    res.type('application/json').send(await getReactionSetJson(em, currentRecordId(res), reactionsCache));
   });
 
   router.patch('/reaction-sets/:id', requireUser, asSet('editor'), async (req, res) => {
