@@ -24,11 +24,11 @@ import { emptyStatusCounts, toSetSummary } from './to-set-view';
  */
 export async function getReactionSet(em: EntityManager, setId: string, options: { withReactions: boolean } = { withReactions: true }): Promise<ReactionSetDetail> {
   const set = await em.findOneOrFail(ReactionSet, setId, { populate: ['updatedBy', 'submittedBy'], refresh: true });
-  const [reactions, nets, comments, revisions] = await Promise.all([
-    options.withReactions ? readReactionViews(em, setId) : Promise.resolve([]),
-    em.find(NetReaction, { set: setId }, { orderBy: { position: 'asc', createdAt: 'asc' }, refresh: true }),
-    em.find(ReviewComment, { set: setId }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] }),
-    em.find(Revision, { set: setId }, { orderBy: { number: 'desc' }, populate: ['vettedBy'] }),
+  const [reactions, nets, comments, revisions] = await readTogether(em, [
+    () => (options.withReactions ? readReactionViews(em, setId) : Promise.resolve([])),
+    () => em.find(NetReaction, { set: setId }, { orderBy: { position: 'asc', createdAt: 'asc' }, refresh: true }),
+    () => em.find(ReviewComment, { set: setId }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] }),
+    () => em.find(Revision, { set: setId }, { orderBy: { number: 'desc' }, populate: ['vettedBy'] }),
   ]);
   const publications = revisions.length === 0 ? [] : await em.find(Publication, { revision: { $in: revisions.map((revision) => revision.id) } });
   const publicationOf = new Map(publications.map((publication) => [publication.revision.id, publication.id]));
@@ -54,6 +54,20 @@ export async function getReactionSet(em: EntityManager, setId: string, options: 
       publicationId: publicationOf.get(revision.id) ?? null,
     })),
   };
+}
+
+/**
+ * Runs independent reads side by side on pooled connections, or one after another inside a
+ * transaction, where every query shares the transaction's single connection (node-postgres
+ * refuses overlapping queries on one client).
+ */
+async function readTogether<A, B, C, D>(
+  em: EntityManager,
+  reads: [() => Promise<A>, () => Promise<B>, () => Promise<C>, () => Promise<D>],
+): Promise<[A, B, C, D]> {
+  const [a, b, c, d] = reads;
+  if (!em.isInTransaction()) return Promise.all([a(), b(), c(), d()]);
+  return [await a(), await b(), await c(), await d()];
 }
 
 /** Stands in for the reactions array while the rest of the answer is serialised. */
