@@ -1,9 +1,7 @@
-import { randomUUID } from 'node:crypto';
 import { RequestContext } from '@mikro-orm/core';
 import type { MikroORM } from '@mikro-orm/postgresql';
 import express, { type Express } from 'express';
 import type { Logger } from 'pino';
-import { pinoHttp } from 'pino-http';
 import { activityRoutes } from './audit/routes';
 import { authRoutes } from './auth/routes';
 import { chemRoutes } from './chem/routes';
@@ -14,6 +12,7 @@ import { devRoutes, type OutboxSource } from './dev/routes';
 import { NotFoundError } from './errors/app-errors';
 import { healthRoutes } from './health/routes';
 import { errorHandler } from './http/error-handler';
+import { requestLog } from './http/request-log';
 import { securityHeaders } from './http/security-headers';
 import { serveClient } from './http/serve-client';
 import { acceptInvitationRoutes, teamInvitationRoutes } from './invitations/routes';
@@ -54,18 +53,7 @@ export function createApp(deps: AppDependencies): Express {
   const app = express();
   app.disable('x-powered-by');
   app.use(securityHeaders());
-  app.use(
-    pinoHttp({
-      logger,
-      genReqId: (_req, res) => {
-        const id = randomUUID();
-        res.setHeader('X-Request-Id', id);
-        return id;
-      },
-      // Answered requests (4xx included) are routine: logged at debug so the console stays quiet at the default level.
-      customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : 'debug'),
-    }),
-  );
+  app.use(requestLog(logger));
   app.use(express.json({ limit: '1mb' }));
   app.use((_req, _res, next) => RequestContext.create(orm.em, next));
 

@@ -8,7 +8,7 @@ import { toProblem } from './to-problem';
  */
 export const errorHandler: ErrorRequestHandler = (error, req, res, next) => {
   if (res.headersSent) return next(error);
-  const problem = toProblem(error, String(req.id));
+  const problem = toProblem(error, req.id);
   if (problem.status >= 500) req.log.error({ err: error }, 'request failed');
   res.status(problem.status).type('application/problem+json').json(problem);
 };

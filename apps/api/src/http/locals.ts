@@ -6,6 +6,13 @@ import type { User } from '../users/user.entity';
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
+    /** What `requestLog` gives every request. */
+    interface Request {
+      /** The request's id, also answered as `X-Request-Id`. */
+      id: string;
+      /** The request's logger, carrying its request id. */
+      log: import('pino').Logger;
+    }
     /** What the auth and team middleware leave for the route handlers. */
     interface Locals {
       /** The signed-in user, set by `requireUser`. */
