@@ -24,7 +24,7 @@ import { TeamStore } from '../../teams/team-store';
 import { WaterApi } from '../../water/water-api';
 import { MassBalanceApi } from '../mass-balance-api';
 import { ModelResults } from '../model-results/model-results';
-import { createModelForm, elementsOf, fillModelForm, modelRequestOf, phaseGroup } from './model-form';
+import { createModelForm, elementsOf, fillModelForm, modelRequestOf, phaseGroup, soluteControl, solutesOf } from './model-form';
 
 /** A mass-balance model: waters, candidate phases with their rules, constraints and uncertainty; saved and solved on the server. */
 @Component({
@@ -67,6 +67,11 @@ export class ModelEditor {
     const found = elementsOf([waters.find((water) => water.id === value.initialWaterId), waters.find((water) => water.id === value.finalWaterId)]);
     return [...new Set([...found, ...value.constraints.filter((entry) => entry !== 'charge' && entry !== 'electrons')])].sort();
   });
+  /** A row per solute of the chosen waters, for its own uncertainty. */
+  protected readonly soluteRows = computed(() =>
+    // The controls are added quietly (no valueChanges), so creating them here writes no signal.
+    solutesOf(this.value(), this.waters.value() ?? []).map((solute) => ({ solute, control: soluteControl(this.form, solute) })),
+  );
   protected readonly loadError = computed(() => {
     const error = this.model.error() ?? this.waters.error();
     return error ? describeProblem(toProblem(error)) : null;
@@ -75,7 +80,9 @@ export class ModelEditor {
   constructor() {
     effect(() => {
       const model = this.model.value();
-      untracked(() => (model ? fillModelForm(this.form, model) : this.isNew() && this.form.controls.phases.length === 0 ? this.addPhase() : undefined));
+      // Filled again once the waters arrive: their solutes decide which overrides keep the stored map as it is.
+      const waters = this.waters.value() ?? [];
+      untracked(() => (model ? fillModelForm(this.form, model, waters) : this.isNew() && this.form.controls.phases.length === 0 ? this.addPhase() : undefined));
     });
     effect(() => (this.canWrite() ? this.form.enable({ emitEvent: false }) : this.form.disable({ emitEvent: false })));
   }
