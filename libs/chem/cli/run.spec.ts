@@ -1,3 +1,5 @@
+// Sources of the checked reactions: complete pyrite oxidation, Itasca Denver report to Colorado DRMS eq. 3.1;
+// pyrite oxidation to Fe2+, Reitner & Thiel 2011 (Encyclopedia of Geobiology); molar masses from the IUPAC 2021 abridged weights (Prohaska et al. 2022).
 import { execFileSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';

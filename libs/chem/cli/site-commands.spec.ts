@@ -1,3 +1,6 @@
+// Sources: Droop (1987, Min. Mag. 51, 431) for Fe3+ from stoichiometry (magnetite Fe3O4 recovered from FeO total);
+// CO2 per tonne computed from stoichiometry with IUPAC 2021 weights (forsterite 1.2512 t/t, shared/reference/check-values.md);
+// the mass-balance case is synthetic (calcite + CO2 → Ca2+ + 2 HCO3-, a standard textbook reaction).
 import { describe, expect, it } from 'vitest';
 import { run, type CliIo } from './run';
 

@@ -1,3 +1,5 @@
+// Sources: the pyrite reactions are Itasca Denver report to Colorado DRMS eq. 3.1 (4 H+ per FeS2) and Reitner & Thiel
+// 2011 (to Fe2+); the other systems are textbook statuses (open, impossible) checked by their definition.
 import { describe, expect, it } from 'vitest';
 import { balanceEquation } from './balance-equation';
 

@@ -1,3 +1,5 @@
+// Source: the oxide values are invented input; the checks are about reading pasted text (headers, decimal commas,
+// line and column of each problem), not about chemistry.
 import { readPastedOxides } from './oxide-paste';
 
 describe('readPastedOxides', () => {

@@ -1,3 +1,6 @@
+// Sources: the recalculation steps follow Brady & Perkins (SERC Carleton, mineral formula recalculation); the An38
+// plagioclase is Garrels & Mackenzie's (recalled from memory) and its oxide wt% are computed back from the ideal
+// formula with IUPAC 2021 weights; the Colgate olivine is a published worked example (recalled from memory).
 import { oxideWeightPercents } from '@tallus/chem';
 
 import { recalculate } from './recalculation';

@@ -1,3 +1,5 @@
+// Source of the ±5 % threshold: common practice of laboratory QA (Marshall Miller & Assoc.; shared/reference/practice.md);
+// the checks are about how a CBE is labelled, the CBE itself is computed by libs/chem.
 import { chargeBalance } from '@tallus/chem';
 
 import { cbeView } from './cbe-view';

@@ -1,3 +1,5 @@
+// Source of the checked reaction: complete pyrite oxidation, Itasca Denver report to Colorado DRMS, eq. 3.1
+// (coefficients 15/4 O2, 7/2 H2O, 4 H+); the rest checks notation, not chemistry.
 import { equationParts } from './equation-parts';
 
 describe('equationParts', () => {

@@ -1,3 +1,5 @@
+// Source of the rendered reaction: complete pyrite oxidation, Itasca Denver report to Colorado DRMS, eq. 3.1;
+// the checks are about rendering (sub- and superscripts, stacked 15/4), not new chemistry.
 import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 

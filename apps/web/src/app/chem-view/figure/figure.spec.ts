@@ -1,3 +1,4 @@
+// Source: none needed: these check number formatting only (fixed decimals, true minus sign), no chemistry.
 import { formatFigure } from './figure';
 
 describe('formatFigure', () => {

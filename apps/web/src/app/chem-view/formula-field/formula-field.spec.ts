@@ -1,3 +1,5 @@
+// Source of the molar mass: kaolinite Al2Si2O5(OH)4 = 258.157 g/mol, computed from the IUPAC 2021 abridged
+// atomic weights (Prohaska et al. 2022, Pure Appl. Chem. 94, 573), as tabulated in shared/reference/check-values.md §1b.
 import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { FormControl } from '@angular/forms';

@@ -1,3 +1,4 @@
+// Source: none needed: these check how exact rationals are split for display (sign, numerator, denominator), no chemistry.
 import { fractionParts } from './fraction-parts';
 
 describe('fractionParts', () => {

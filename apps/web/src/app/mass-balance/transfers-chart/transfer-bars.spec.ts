@@ -1,3 +1,5 @@
+// Source: the transfers below are an invented solver result; the checks are about charting them faithfully
+// (exact text kept, rule breaks marked), not about chemistry.
 import type { MassBalanceSolution } from '@tallus/contracts';
 
 import { transferBars } from './transfer-bars';

@@ -1,3 +1,5 @@
+// Sources: molar masses from the IUPAC 2021 abridged weights (Prohaska et al. 2022); alkalinity as CaCO3 at
+// 50.04 mg per meq (Standard Methods 2320); CBE = (Σcat − Σan)/(Σcat + Σan) × 100 (Marshall Miller & Assoc.).
 import { liveBalance } from './live-balance';
 
 describe('liveBalance', () => {
