@@ -1,11 +1,10 @@
-import type { Role } from '@tallus/contracts';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createSet } from './support/reaction-sets';
 import { mmolWater, uploadCsv } from './support/site-data';
-import { addMember, createTeam, registerUser, startTestApp, type SignedInUser, type TestApp } from './support/test-app';
+import { enrolMatrixTeam, expectMatrixAnswer, matrixCases, type Actor } from './support/role-matrix';
+import { startTestApp, type SignedInUser, type TestApp } from './support/test-app';
 
-type Actor = Role | 'outsider';
 
 let testApp: TestApp;
 const actors = {} as Record<Actor, SignedInUser>;
@@ -143,22 +142,12 @@ const MATRIX: Record<keyof typeof ROUTES, Record<Actor, number>> = {
   'POST /chem/mass-balance': ANYONE,
 };
 
-const ACTORS: Actor[] = ['owner', 'reviewer', 'editor', 'viewer', 'outsider'];
-const CASES = Object.entries(MATRIX).flatMap(([route, statuses]) => ACTORS.map((actor) => [route, actor, statuses[actor]] as const));
+const CASES = matrixCases(MATRIX);
 
 describe('Site-data, report and site-chemistry routes by role', () => {
   beforeAll(async () => {
     testApp = await startTestApp();
-    actors.owner = await registerUser(app(), 'owner');
-    teamId = await createTeam(app(), actors.owner, 'Site Matrix Team');
-    for (const role of ['reviewer', 'editor', 'viewer'] as const) {
-      actors[role] = await registerUser(app(), role);
-      await addMember(testApp, teamId, actors[role], role);
-    }
-    author = await registerUser(app(), 'author');
-    await addMember(testApp, teamId, author, 'editor');
-    actors.outsider = await registerUser(app(), 'outsider');
-    await createTeam(app(), actors.outsider, 'Elsewhere');
+    ({ teamId, author } = await enrolMatrixTeam(testApp, actors, 'Site Matrix Team'));
   });
 
   afterAll(async () => {
@@ -168,9 +157,7 @@ describe('Site-data, report and site-chemistry routes by role', () => {
   it.each(CASES)('When %s is called by the %s, then the status is %i', async (route, actor, status) => {
     const response = await ROUTES[route]!(actors[actor]);
 
-    expect(response.status, JSON.stringify(response.body)).toBe(status);
-    if (status === 403) expect(response.body.code).toBe('TEAM_ROLE_REQUIRED');
-    if (status === 404) expect(response.body.code).toMatch(/_NOT_FOUND$/);
+    expectMatrixAnswer(response, status);
   });
 
   it('When an outsider asks for an existing water analysis and a missing one, then both answers are identical', async () => {
