@@ -44,8 +44,8 @@ export function authRoutes({ em, config, requireUser, sessions }: AuthRoutesDepe
   router.post('/logout', async (req, res) => {
     const token = bearerToken(req.headers.authorization);
     const claims = token ? tryVerify(token, config.jwt.secret) : undefined;
-    if (claims) {
-      sessions.forget(claims.tokenId);
+    if (token && claims) {
+      sessions.forget(token);
       await signOut(em, claims);
     }
     res.status(204).end();

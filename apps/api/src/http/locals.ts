@@ -1,3 +1,4 @@
+import type { Role } from '@tallus/contracts';
 import type { Response } from 'express';
 import type { SessionClaims } from '../auth/session-token';
 import type { Membership } from '../teams/membership.entity';
@@ -15,12 +16,16 @@ declare global {
     }
     /** What the auth and team middleware leave for the route handlers. */
     interface Locals {
-      /** The signed-in user, set by `requireUser`. */
+      /** The signed-in user, set by `requireUser` (or made from `loadUser` on first use). */
       user?: User;
+      /** Makes the signed-in user from the session cache; `requireUser` leaves it instead of `user` on a cache hit. */
+      loadUser?: () => User;
       /** The claims of the caller's token, set by `requireUser`. */
       session?: SessionClaims;
-      /** The caller's membership of `:teamId`, set by `requireTeamRole`. */
+      /** The caller's membership of `:teamId` (with its team), set by `requireTeamRole`. */
       membership?: Membership;
+      /** The caller's role in the team of the route's record, set by `requireRecordRole`. */
+      recordRole?: Role;
       /** The id of the route's record (`:id`), set by `requireRecordRole` once the caller may act on it. */
       recordId?: string;
     }
@@ -33,8 +38,19 @@ declare global {
  * @throws Error when the route forgot `requireUser` (a bug, so a 500)
  */
 export function currentUser(res: Response): User {
+  res.locals.user ??= res.locals.loadUser?.();
   if (!res.locals.user) throw new Error('currentUser() called on a route without requireUser');
   return res.locals.user;
+}
+
+/**
+ * The id of the signed-in user of a route behind `requireUser`, without making the user entity.
+ *
+ * @throws Error when the route forgot `requireUser` (a bug, so a 500)
+ */
+export function currentUserId(res: Response): string {
+  if (!res.locals.session) throw new Error('currentUserId() called on a route without requireUser');
+  return res.locals.session.userId;
 }
 
 /**

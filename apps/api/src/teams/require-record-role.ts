@@ -3,9 +3,8 @@ import { hasRole, type ApiErrorCode, type Role } from '@tallus/contracts';
 import type { RequestHandler } from 'express';
 import { z } from 'zod';
 import { ForbiddenError, NotFoundError } from '../errors/app-errors';
-import { currentUser } from '../http/locals';
+import { currentUserId } from '../http/locals';
 import { parseIdParam } from '../http/validate';
-import { Membership } from './membership.entity';
 
 /** How to find the team of one kind of record. */
 export interface RecordKind {
@@ -18,9 +17,9 @@ export interface RecordKind {
 const recordIdSchema = z.uuid();
 
 /**
- * Middleware for every `/<records>/:id` route: finds the record's team, then
- * the caller's membership of it (with the team) into `res.locals.membership`,
- * and the id into `res.locals.recordId`. Must follow `requireUser`.
+ * Middleware for every `/<records>/:id` route: finds the caller's role in the record's team, in
+ * one statement, into `res.locals.recordRole`, and the id into `res.locals.recordId`. Must follow
+ * `requireUser`. No entity is loaded: these routes load their own records.
  *
  * @param em request-scoped EntityManager
  * @param kind which table, and which 404 code
@@ -30,17 +29,16 @@ const recordIdSchema = z.uuid();
  * @throws ForbiddenError TEAM_ROLE_REQUIRED when the caller is a member with a weaker role
  */
 export function requireRecordRole(em: EntityManager, kind: RecordKind, required: Role): RequestHandler {
+  const roleSql = `select m.role from memberships m where m.user_id = ? and m.team_id = (${kind.teamSql})`;
   return async (req, res, next) => {
     const id = parseIdParam(recordIdSchema, req.params['id'], kind.notFound);
-    // Raw SQL, not an entity load: a partial entity in the request's identity map would confuse the use case's own loads.
-    const rows = await em.execute<Array<{ team_id: string }>>(kind.teamSql, [id]);
-    const teamId = rows[0]?.team_id;
-    const membership = teamId ? await em.findOne(Membership, { team: teamId, user: currentUser(res) }, { populate: ['team'] }) : null;
-    if (!membership) throw new NotFoundError(kind.notFound, 'No such record, or it belongs to a team you are not a member of.');
-    if (!hasRole(membership.role, required)) {
-      throw new ForbiddenError('TEAM_ROLE_REQUIRED', `This needs the ${required} role in the team; you are ${membership.role}.`);
+    const rows = await em.execute<Array<{ role: Role }>>(roleSql, [currentUserId(res), id]);
+    const role = rows[0]?.role;
+    if (!role) throw new NotFoundError(kind.notFound, 'No such record, or it belongs to a team you are not a member of.');
+    if (!hasRole(role, required)) {
+      throw new ForbiddenError('TEAM_ROLE_REQUIRED', `This needs the ${required} role in the team; you are ${role}.`);
     }
-    res.locals.membership = membership;
+    res.locals.recordRole = role;
     res.locals.recordId = id;
     next();
   };
