@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { getReactionSet } from '../../apps/api/src/reaction-sets/get-reaction-set';
 import { addReaction, createSet, PUBLISHED } from './support/reaction-sets';
 import { addMember, createTeam, registerUser, startTestApp, type SignedInUser, type TestApp } from './support/test-app';
 
@@ -8,6 +9,9 @@ let owner: SignedInUser;
 let reviewer: SignedInUser;
 let editor: SignedInUser;
 let teamId: string;
+/** The other team's copy of the published set, made by the library test. */
+let copy: { id: string; teamId: string; reactions: Array<{ id: string }> } | undefined;
+let stranger: SignedInUser;
 
 const get = (user: SignedInUser, path: string) => request(testApp.app).get(path).set('Authorization', user.auth);
 const post = (user: SignedInUser, path: string, body: object = {}) => request(testApp.app).post(path).set('Authorization', user.auth).send(body);
@@ -112,7 +116,7 @@ describe('Review journey', () => {
     expect((await post(reviewer, `/api/reaction-sets/${setId}/publish`)).status).toBe(403);
 
     const publication = (await post(owner, `/api/reaction-sets/${setId}/publish`).expect(201)).body;
-    const stranger = await registerUser(testApp.app, 'stranger');
+    stranger = await registerUser(testApp.app, 'stranger');
     const otherTeam = await createTeam(testApp.app, stranger, 'Other Team');
 
     const library = (await get(stranger, '/api/library').expect(200)).body;
@@ -121,9 +125,41 @@ describe('Review journey', () => {
     expect(preview.snapshot.reactions[0].equation).toBe(PUBLISHED.forsterite);
     expect((await post(stranger, `/api/library/${publication.id}/copy`, { teamId })).status).toBe(404);
 
-    const copy = (await post(stranger, `/api/library/${publication.id}/copy`, { teamId: otherTeam }).expect(201)).body;
+    copy = (await post(stranger, `/api/library/${publication.id}/copy`, { teamId: otherTeam }).expect(201)).body;
     expect(copy).toMatchObject({ teamId: otherTeam, reviewState: 'draft', currentRevision: 0, name: 'Published set' });
-    expect(copy.copiedFrom).toEqual({ publicationId: publication.id, teamName: 'Review Team', setName: 'Published set', revision: 1 });
-    expect(copy.reactions[0].result.protonBudget.perMole).toBe('-4');
+    expect(copy!.copiedFrom).toEqual({ publicationId: publication.id, teamName: 'Review Team', setName: 'Published set', revision: 1 });
+    expect(copy!.reactions[0].result.protonBudget.perMole).toBe('-4');
+  });
+
+  it('When sets with comments, revisions, a publication, a net reaction and a copy origin are read over HTTP, then each answer equals the object form of the use case', async () => {
+    // The GET builds its answer in SQL (one statement and the reactions cache); getReactionSet builds it from entities.
+    expect(copy).toBeDefined();
+    const [reaction] = copy!.reactions;
+    await post(stranger, `/api/reaction-sets/${copy!.id}/net-reactions`, { name: 'Doubled', reactions: [{ reactionId: reaction!.id, multiplier: '2' }], cancel: [] }).expect(201);
+    const ownSets = (await get(owner, `/api/teams/${teamId}/reaction-sets`).expect(200)).body as Array<{ id: string }>;
+    const reads = [...ownSets.map((set) => ({ user: owner, id: set.id })), { user: stranger, id: copy!.id }];
+
+    for (const { user, id } of reads) {
+      const overHttp = (await get(user, `/api/reaction-sets/${id}`).expect(200)).body;
+      expect(overHttp).toEqual(await getReactionSet(testApp.orm.em.fork(), id));
+    }
+    const answers = await Promise.all(reads.map(({ user, id }) => get(user, `/api/reaction-sets/${id}`).expect(200)));
+    const seen = answers.map((answer) => answer.body as { comments: unknown[]; revisions: Array<{ publicationId: string | null }>; netReactions: unknown[]; copiedFrom: unknown });
+    expect(seen.some((set) => set.comments.length >= 4 && set.revisions.length >= 1)).toBe(true);
+    expect(seen.some((set) => set.revisions.some((revision) => revision.publicationId !== null))).toBe(true);
+    expect(seen.some((set) => set.netReactions.length === 1 && set.copiedFrom !== null)).toBe(true);
+  });
+
+  it('When a set is read again with its entity tag, then the answer is 304 until the set changes', async () => {
+    const setId = await createSet(testApp.app, editor, teamId, 'Tagged set');
+    await addReaction(testApp.app, editor, setId, { name: 'Forsterite', equation: PUBLISHED.forsterite, kind: 'dissolution' });
+    const first = await get(editor, `/api/reaction-sets/${setId}`).expect(200);
+    const etag = first.headers['etag'] as string;
+
+    await get(editor, `/api/reaction-sets/${setId}`).set('If-None-Match', etag).expect(304);
+    await request(testApp.app).patch(`/api/reaction-sets/${setId}`).set('Authorization', editor.auth).send({ description: 'Changed', version: first.body.version }).expect(200);
+    const changed = await get(editor, `/api/reaction-sets/${setId}`).set('If-None-Match', etag).expect(200);
+    expect(changed.headers['etag']).not.toBe(etag);
+    expect(changed.body.description).toBe('Changed');
   });
 });

@@ -1,11 +1,8 @@
-import { NotFoundError } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { ReactionSetDetail, StatusCounts } from '@tallus/contracts';
 import { Publication } from '../library/publication.entity';
 import { NetReaction } from '../net-reactions/net-reaction.entity';
 import { toNetReactionView } from '../net-reactions/to-net-reaction-view';
-import type { ReactionsJsonCache } from '../reactions/reactions-json-cache';
-import { readReactionsJson } from '../reactions/read-reactions-json';
 import { readReactionViews } from '../reactions/read-reaction-views';
 import { ReviewComment } from '../review/review-comment.entity';
 import { Revision } from '../review/revision.entity';
@@ -22,10 +19,10 @@ import { emptyStatusCounts, toSetSummary } from './to-set-view';
  * @param setId the set
  * @throws NotFoundError (MikroORM's) when the set is gone
  */
-export async function getReactionSet(em: EntityManager, setId: string, options: { withReactions: boolean } = { withReactions: true }): Promise<ReactionSetDetail> {
+export async function getReactionSet(em: EntityManager, setId: string): Promise<ReactionSetDetail> {
   const set = await em.findOneOrFail(ReactionSet, setId, { populate: ['updatedBy', 'submittedBy'], refresh: true });
   const [reactions, nets, comments, revisions] = await readTogether(em, [
-    () => (options.withReactions ? readReactionViews(em, setId) : Promise.resolve([])),
+    () => readReactionViews(em, setId),
     () => em.find(NetReaction, { set: setId }, { orderBy: { position: 'asc', createdAt: 'asc' }, refresh: true }),
     () => em.find(ReviewComment, { set: setId }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] }),
     () => em.find(Revision, { set: setId }, { orderBy: { number: 'desc' }, populate: ['vettedBy'] }),
@@ -68,36 +65,4 @@ async function readTogether<A, B, C, D>(
   const [a, b, c, d] = reads;
   if (!em.isInTransaction()) return Promise.all([a(), b(), c(), d()]);
   return [await a(), await b(), await c(), await d()];
-}
-
-/** Stands in for the reactions array while the rest of the answer is serialised. */
-const REACTIONS_SLOT = '"__tallus_reactions__"';
-
-/**
- * The JSON text of {@link getReactionSet}'s answer, for `GET /api/reaction-sets/:id`: the
- * reactions array comes as text from PostgreSQL ({@link readReactionsJson}), or from the cache when
- * the set's version has not changed since, and is spliced into the serialised rest, so a large set
- * is neither parsed nor re-serialised in Node.
- *
- * @throws NotFoundError (MikroORM's) when the set is gone
- */
-export async function getReactionSetJson(em: EntityManager, setId: string, cache: ReactionsJsonCache): Promise<string> {
-  const detail = await getReactionSetWithout(em, setId);
-  let reactions = cache.find(setId, detail.version);
-  if (!reactions) {
-    reactions = await readReactionsJson(em, setId);
-    if (!reactions) throw NotFoundError.findOneFailed('ReactionSet', { id: setId });
-    cache.store(setId, reactions);
-  }
-  const statusCounts: StatusCounts = { ...emptyStatusCounts(), ...reactions.counts };
-  const reactionCount = Object.values(statusCounts).reduce((sum, count) => sum + count, 0);
-  const text = JSON.stringify({ ...detail, reactionCount, statusCounts, reactions: JSON.parse(REACTIONS_SLOT) as string });
-  const reactionsText = reactions.reactions;
-  return text.replace(REACTIONS_SLOT, () => reactionsText);
-}
-
-/** {@link getReactionSet} without reading the reactions. */
-async function getReactionSetWithout(em: EntityManager, setId: string): Promise<Omit<ReactionSetDetail, 'reactions'>> {
-  const { reactions: _reactions, ...rest } = await getReactionSet(em, setId, { withReactions: false });
-  return rest;
 }

@@ -18,7 +18,7 @@ import { reorderReactions } from '../reactions/reorder-reactions';
 import { createReaction, deleteReaction, updateReaction } from '../reactions/save-reaction';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
-import { getReactionSetJson } from './get-reaction-set';
+import { getReactionSetJson } from './get-reaction-set-json';
 import { listReactionSets } from './list-reaction-sets';
 import { createReactionSet, deleteReactionSet, updateReactionSet } from './save-reaction-set';
 
@@ -49,7 +49,9 @@ export function reactionSetRoutes(em: EntityManager, requireUser: RequestHandler
   });
 
   router.get('/reaction-sets/:id', requireUser, asSet('viewer'), async (_req, res) => {
-    res.type('application/json').send(await getReactionSetJson(em, currentRecordId(res), reactionsCache));
+    const { body, etag } = await getReactionSetJson(em, currentRecordId(res), reactionsCache);
+    // With the entity tag set here, Express answers 304 to a matching If-None-Match without hashing the body.
+    res.set('ETag', etag).type('application/json').send(body);
   });
 
   router.patch('/reaction-sets/:id', requireUser, asSet('editor'), async (req, res) => {

@@ -1,5 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { BalanceStatus, StatusCounts } from '@tallus/contracts';
+import { isoTimestampSql } from '../db/iso-timestamp-sql';
 
 /** A set's reactions as JSON text, with the set version they belong to and their counts by status. */
 export interface ReactionsJson {
@@ -28,7 +29,7 @@ export async function readReactionsJson(em: EntityManager, setId: string): Promi
           'reference', r.reference, 'citation', r.citation, 'notes', r.notes,
           'result', r.balance || jsonb_build_object('status', r.status, 'residuals', r.residuals, 'electrons', r.electron_budget, 'protonBudget', r.proton_budget),
           'version', r.version,
-          'updatedAt', to_char(r.updated_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')
+          'updatedAt', ${isoTimestampSql('r.updated_at')}
         ) order by r.position, r.id), '[]'::json)::text from reactions r where r.set_id = s.id) as reactions,
        (select json_object_agg(c.status, c.count) from
           (select status, count(*) as count from reactions where set_id = s.id group by status) c) as counts
