@@ -75,7 +75,7 @@ async function startServer(): Promise<{ url: string; stop: () => Promise<void> }
   const database = process.env['TALLUS_DB_NAME'] ?? 'tallus_bench';
   await ensureDatabase(database);
   const port = await freePort();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'apps/api/src/main.ts'], {
+  const child = spawn(process.execPath, [...(process.env['BENCH_NODE_ARGS']?.split(' ').filter(Boolean) ?? []), '--import', 'tsx', 'apps/api/src/main.ts'], {
     env: { ...process.env, TALLUS_DB_NAME: database, NODE_ENV: 'development', LOG_LEVEL: 'warn', BCRYPT_COST: '10', CHEM_RATE_LIMIT_PER_MINUTE: '0', PORT: String(port), HOST: '127.0.0.1', WEB_DIST: 'bench/api/no-client', TALLUS_SEED_DEMO: '0' },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
