@@ -15,7 +15,8 @@
  * (autocannon's `response` event) and p95 is read from the sorted times. Prints a table and one
  * JSON line. The GET runs twice: with one connection (one user opening the set: the latency
  * target) and with BENCH_CONNECTIONS (queueing included). Settings: BENCH_DURATION seconds per
- * run (10), BENCH_CONNECTIONS (10).
+ * run (10), BENCH_CONNECTIONS (10), BENCH_NODE_ARGS (node flags for the API child, such as
+ * `--cpu-prof --cpu-prof-dir=.tmp/prof`).
  */
 import { spawn } from 'node:child_process';
 import { createRequire } from 'node:module';
