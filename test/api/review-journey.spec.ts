@@ -1,3 +1,4 @@
+import type { ReactionSetDetail } from '@tallus/contracts';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getReactionSet } from '../../apps/api/src/reaction-sets/get-reaction-set';
@@ -10,7 +11,7 @@ let reviewer: SignedInUser;
 let editor: SignedInUser;
 let teamId: string;
 /** The other team's copy of the published set, made by the library test. */
-let copy: { id: string; teamId: string; reactions: Array<{ id: string }> } | undefined;
+let copy: ReactionSetDetail | undefined;
 let stranger: SignedInUser;
 
 const get = (user: SignedInUser, path: string) => request(testApp.app).get(path).set('Authorization', user.auth);
@@ -128,7 +129,7 @@ describe('Review journey', () => {
     copy = (await post(stranger, `/api/library/${publication.id}/copy`, { teamId: otherTeam }).expect(201)).body;
     expect(copy).toMatchObject({ teamId: otherTeam, reviewState: 'draft', currentRevision: 0, name: 'Published set' });
     expect(copy!.copiedFrom).toEqual({ publicationId: publication.id, teamName: 'Review Team', setName: 'Published set', revision: 1 });
-    expect(copy!.reactions[0].result.protonBudget.perMole).toBe('-4');
+    expect(copy!.reactions[0]?.result.protonBudget?.perMole).toBe('-4');
   });
 
   it('When sets with comments, revisions, a publication, a net reaction and a copy origin are read over HTTP, then each answer equals the object form of the use case', async () => {
