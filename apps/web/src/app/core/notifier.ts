@@ -19,6 +19,15 @@ export class Notifier {
   }
 
   /**
+   * Says that something did not work but the page still does, and what that means for the user.
+   *
+   * @param message the consequence in plain words
+   */
+  warning(message: string): void {
+    this.snackBar.open(message, 'Dismiss', { duration: 8000, panelClass: 'tl-snack-error' });
+  }
+
+  /**
    * Shows a problem that has no field to show it at; stays until dismissed for long texts.
    *
    * @param problem the parsed problem

@@ -1,4 +1,4 @@
-import { combineReactions, formatFormula, parseEquation, speciesKey, type ChemIssue } from '@tallus/chem';
+import { combineReactions, formatFormula, parseEquation, speciesKey, type ChemIssue, type OxidationStateMap } from '@tallus/chem';
 
 import { CheckView, checkReaction } from '../reactions/reaction-check/check-reaction';
 
@@ -49,8 +49,9 @@ export function speciesOf(equations: readonly string[]): string[] {
  *
  * @param picked the reactions, in order, with optional fixed multipliers
  * @param cancel formulas of the intermediates to cancel
+ * @param oxidationStates explicit oxidation states of the team's catalogue, for the electron budget
  */
-export function composeNet(picked: readonly PickedReaction[], cancel: readonly string[]): NetView {
+export function composeNet(picked: readonly PickedReaction[], cancel: readonly string[], oxidationStates?: OxidationStateMap): NetView {
   if (picked.length === 0) {
     return { status: 'empty', multipliers: [], equation: null, check: null, freedom: 0, error: null, warnings: [] };
   }
@@ -65,7 +66,7 @@ export function composeNet(picked: readonly PickedReaction[], cancel: readonly s
     status: result.status,
     multipliers: result.multipliers.map((multiplier) => multiplier?.toString() ?? null),
     equation: result.equation,
-    check: result.status === 'combined' && result.equation ? checkReaction({ equation: result.equation }) : null,
+    check: result.status === 'combined' && result.equation ? checkReaction({ equation: result.equation, oxidationStates }) : null,
     freedom: result.freedom,
     error: result.error ?? null,
     warnings: result.warnings.map((warning) => warning.message),

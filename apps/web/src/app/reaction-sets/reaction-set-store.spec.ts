@@ -58,6 +58,14 @@ describe('ReactionSetStore', () => {
     expect(store.set()?.reactionCount).toBe(3);
   });
 
+  it('loads the explicit oxidation states of the built-in and the team catalogue, the team winning for a formula', () => {
+    expect(store.oxidationStates()).toBeUndefined();
+    store.loadOxidationStates('t1').subscribe();
+    http.expectOne('/api/species/builtin').flush([{ formula: 'FeS', oxidationStates: { Fe: '2', S: '-2' } }, { formula: 'CaCO3', oxidationStates: null }]);
+    http.expectOne('/api/teams/t1/species').flush([{ formula: 'FeS', oxidationStates: { Fe: '20/9', S: '-2' } }]);
+    expect(store.oxidationStates()).toEqual({ FeS: { Fe: '20/9', S: '-2' } });
+  });
+
   it('is not editable while the set is under review', () => {
     expect(store.isEditable()).toBe(true);
     store.review('submit', '').subscribe();

@@ -1,5 +1,6 @@
 import { Injectable, computed, inject, signal } from '@angular/core';
-import { Observable, finalize, map, tap } from 'rxjs';
+import type { OxidationStateMap } from '@tallus/chem';
+import { Observable, finalize, forkJoin, map, tap } from 'rxjs';
 import type {
   CreateNetReactionRequest,
   CreateReactionRequest,
@@ -11,15 +12,19 @@ import type {
   UpdateReactionRequest,
 } from '@tallus/contracts';
 
+import { toOxidationStateMap } from '../species/oxidation-state-map';
+import { SpeciesApi } from '../species/species-api';
 import { ReactionSetsApi } from './reaction-sets-api';
 
 /** The reaction set open in the editor, and every change to it. One store per open set page. */
 @Injectable()
 export class ReactionSetStore {
   private readonly api = inject(ReactionSetsApi);
+  private readonly speciesApi = inject(SpeciesApi);
 
   private readonly setState = signal<ReactionSetDetail | null>(null);
   private readonly busyState = signal(0);
+  private readonly oxidationStateMap = signal<OxidationStateMap | undefined>(undefined);
 
   /** The set as last read or written; null until loaded. */
   readonly set = this.setState.asReadonly();
@@ -32,6 +37,20 @@ export class ReactionSetStore {
     const state = this.setState()?.reviewState;
     return state !== undefined && state !== 'in_review';
   });
+
+  /**
+   * Explicit oxidation states of the built-in and the team's catalogue, which the server checks
+   * the set's reactions with; undefined until loaded (the browser's checks use the engine's rules meanwhile).
+   */
+  readonly oxidationStates = this.oxidationStateMap.asReadonly();
+
+  /** Loads the catalogues' explicit oxidation states, so that the browser's checks match the server's. */
+  loadOxidationStates(teamId: string): Observable<OxidationStateMap> {
+    return forkJoin([this.speciesApi.listBuiltin(), this.speciesApi.listTeamSpecies(teamId)]).pipe(
+      map(([builtin, team]) => toOxidationStateMap(builtin, team)),
+      tap((states) => this.oxidationStateMap.set(states)),
+    );
+  }
 
   /** Loads (or reloads, e.g. after a conflict) the set. */
   load(setId: string): Observable<ReactionSetDetail> {

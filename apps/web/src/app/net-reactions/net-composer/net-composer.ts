@@ -59,7 +59,9 @@ export class NetComposer {
       .map((reaction) => ({ id: reaction.id, name: reaction.name, equation: textOf(reaction), multiplier: this.fixed()[reaction.id] ?? '' }));
   });
   protected readonly species = computed(() => speciesOf(this.picked().map((reaction) => reaction.equation)));
-  protected readonly net = computed(() => composeNet(this.picked(), this.cancel().filter((formula) => this.species().includes(formula))));
+  protected readonly net = computed(() =>
+    composeNet(this.picked(), this.cancel().filter((formula) => this.species().includes(formula)), this.store.oxidationStates()),
+  );
   protected readonly statusView = computed(() => NET_STATUS_VIEWS[this.net().status]);
   protected readonly errorText = computed(() => {
     const error = this.net().error;

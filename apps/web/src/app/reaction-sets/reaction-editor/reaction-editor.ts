@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, DestroyRef, computed, effect, inject, input, output, signal, untracked } from '@angular/core';
-import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -7,7 +7,6 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
-import type { OxidationStateMap } from '@tallus/chem';
 import type { Problem, Reaction, ReactionKind } from '@tallus/contracts';
 import { combineLatest, map, startWith } from 'rxjs';
 
@@ -53,8 +52,6 @@ export class ReactionEditor {
   readonly reaction = input<Reaction | null>(null);
   /** Whether the set takes edits now. */
   readonly isEditable = input(true);
-  /** Explicit oxidation states of the team's species, for the electron budget. */
-  readonly oxidationStates = input<OxidationStateMap | undefined>(undefined);
   /** Emitted after a save, with the stored reaction. */
   readonly saved = output<Reaction>();
   /** Emitted when the user closes the editor without saving. */
@@ -79,12 +76,14 @@ export class ReactionEditor {
   private readonly request = combineLatest([
     this.form.valueChanges.pipe(startWith(null), map(() => this.form.getRawValue())),
     this.rockPercent.valueChanges.pipe(startWith(this.rockPercent.value)),
+    // The catalogue's explicit oxidation states arrive after the page opens; the check runs again with them.
+    toObservable(this.store.oxidationStates),
   ]).pipe(
-    map(([value, percent]) => ({
+    map(([value, percent, oxidationStates]) => ({
       equation: value.equation,
       reference: value.reference || null,
       rockWeightPercent: typeof percent === 'number' && percent >= 0 && percent <= 100 ? percent : null,
-      oxidationStates: this.oxidationStates(),
+      oxidationStates,
     })),
   );
   protected readonly check = toSignal(this.request.pipe(liveCheck()), { initialValue: EMPTY_CHECK });

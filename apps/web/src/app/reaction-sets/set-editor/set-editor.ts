@@ -85,6 +85,17 @@ export class SetEditor {
       const setId = this.setId();
       untracked(() => this.load(setId));
     });
+    effect(() => {
+      const teamId = this.teamId();
+      untracked(() =>
+        this.store
+          .loadOxidationStates(teamId)
+          .pipe(takeUntilDestroyed(this.destroyRef))
+          .subscribe({
+            error: () => this.notifier.warning('The species catalogue did not load: checks in this page use the oxidation-state rules only until you reload. Saved results are unaffected.'),
+          }),
+      );
+    });
   }
 
   protected load(setId: string): void {
