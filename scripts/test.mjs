@@ -1,5 +1,5 @@
 // `npm test`: install what is missing, start a throwaway PostgreSQL in a temporary folder, build the
-// client, run every suite (libs, API on the real database, client unit tests, browser journeys),
+// client, type-check the rest, run every suite (libs, API on the real database, client unit tests, browser journeys),
 // remove the cluster, and end with one line "N passed, N failed".
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
@@ -48,6 +48,9 @@ function main() {
   const outcomes = [];
   const built = runSuite('client build', 'npx', ['ng', 'build', 'web', '--configuration', 'production'], env);
   if (!built) outcomes.push({ passed: 0, failed: 1 });
+  // vitest strips types without checking them; the client build checks the client's.
+  const typed = runSuite('typecheck (libs, API, tests, benchmarks)', 'npx', ['tsc', '-p', 'tsconfig.json', '--noEmit'], env);
+  if (!typed) outcomes.push({ passed: 0, failed: 1 });
 
   // The browser journeys run on their own afterwards: they drive a real server and Chromium, and
   // sharing two cores with the API suites makes their waits flaky.
