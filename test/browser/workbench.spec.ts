@@ -114,6 +114,22 @@ describe('A geochemist writes, checks, combines and shares a reaction set', () =
     await expect.poll(() => page.locator('.saved li').count()).toBe(1);
   });
 
+  it('When they open the saved net reaction again, fix a multiplier and rename it, then the set keeps one net reaction with the changes', async () => {
+    const { page } = editor;
+    await page.getByRole('button', { name: 'Change Pyrite to ferric hydroxide' }).click();
+    await expect.poll(() => page.locator('.editing').textContent()).toContain('Pyrite to ferric hydroxide');
+    expect(await page.getByRole('checkbox', { name: 'Fe2+ oxidation and hydrolysis' }).isChecked()).toBe(true);
+    await page.getByLabel('Fixed multiplier of Fe2+ oxidation and hydrolysis').fill('1/4');
+    await page.getByLabel('Name of the net reaction').fill('Pyrite to ferric hydroxide, overall');
+    await expect.poll(() => page.locator('.result .status-line').textContent()).toContain('combined');
+    await screenshot(page, '05b-net-reaction-changing');
+    await page.getByRole('button', { name: 'Save changes' }).click();
+
+    await expect.poll(() => page.locator('.saved li strong').allTextContents()).toEqual(['Pyrite to ferric hydroxide, overall']);
+    expect(await page.locator('.editing').count()).toBe(0);
+    expect(await fractionText(page, '.saved li tl-fraction')).toBe('4');
+  });
+
   it('When they open the proton budget chart, then each reaction and the net reaction are plotted', async () => {
     const { page } = editor;
     await page.getByRole('tab', { name: 'Proton budget chart' }).click();

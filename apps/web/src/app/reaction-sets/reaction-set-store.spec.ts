@@ -2,7 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
-import type { Reaction, ReactionSetDetail } from '@tallus/contracts';
+import type { NetReaction, Reaction, ReactionSetDetail } from '@tallus/contracts';
 
 import { ReactionSetStore } from './reaction-set-store';
 
@@ -64,6 +64,20 @@ describe('ReactionSetStore', () => {
     http.expectOne('/api/species/builtin').flush([{ formula: 'FeS', oxidationStates: { Fe: '2', S: '-2' } }, { formula: 'CaCO3', oxidationStates: null }]);
     http.expectOne('/api/teams/t1/species').flush([{ formula: 'FeS', oxidationStates: { Fe: '20/9', S: '-2' } }]);
     expect(store.oxidationStates()).toEqual({ FeS: { Fe: '20/9', S: '-2' } });
+  });
+
+  it('saves a changed net reaction with the version it was read at and replaces it in the set', () => {
+    const net = { id: 'n1', setId: 's1', name: 'Net', reactions: [], cancel: [], result: { status: 'combined' }, version: 2, updatedAt: '' } as unknown as NetReaction;
+    store.load('s1').subscribe();
+    http.expectOne('/api/reaction-sets/s1').flush({ ...set([reaction('a', 0)]), netReactions: [net] });
+
+    store.saveNetReaction(net, { name: 'Renamed' }).subscribe();
+    const request = http.expectOne('/api/net-reactions/n1');
+    expect([request.request.method, request.request.body]).toEqual(['PATCH', { name: 'Renamed', version: 2 }]);
+    request.flush({ netReaction: { ...net, name: 'Renamed', version: 3 }, set: { ...set([]), version: 5 } });
+
+    expect(store.set()?.netReactions.map((entry) => [entry.name, entry.version])).toEqual([['Renamed', 3]]);
+    expect(store.set()?.version).toBe(5);
   });
 
   it('is not editable while the set is under review', () => {

@@ -9,6 +9,7 @@ import type {
   Reaction,
   ReactionSetDetail,
   ReactionSetHeader,
+  UpdateNetReactionRequest,
   UpdateReactionRequest,
 } from '@tallus/contracts';
 
@@ -105,6 +106,18 @@ export class ReactionSetStore {
       tap((answer) => {
         const netReactions = this.requireSet().netReactions;
         this.patchHeader(answer.set, { netReactions: answer.netReaction ? [...netReactions, answer.netReaction] : netReactions });
+      }),
+      map((answer) => answer.netReaction),
+    );
+  }
+
+  /** Saves changes to a net reaction with the version it was read at (409 VERSION_CONFLICT when stale). */
+  saveNetReaction(netReaction: NetReaction, body: Omit<UpdateNetReactionRequest, 'version'>): Observable<NetReaction | undefined> {
+    return this.write(this.api.updateNetReaction(netReaction.id, { ...body, version: netReaction.version })).pipe(
+      tap((answer) => {
+        const saved = answer.netReaction;
+        const netReactions = this.requireSet().netReactions.map((entry) => (saved && entry.id === saved.id ? saved : entry));
+        this.patchHeader(answer.set, { netReactions });
       }),
       map((answer) => answer.netReaction),
     );

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, signal } from '@angular/core';
 import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -6,6 +6,7 @@ import { MatChipsModule } from '@angular/material/chips';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
+import { MatTooltipModule } from '@angular/material/tooltip';
 import type { NetReaction, Reaction } from '@tallus/contracts';
 
 import { EquationView } from '../../chem-view/equation-view/equation-view';
@@ -28,11 +29,12 @@ const NET_STATUS_VIEWS: Readonly<Record<string, { label: string; icon: string; t
 
 /**
  * Composes a net reaction from reactions of the set: pick reactions and the species to cancel,
- * see the exact multipliers, the combined reaction and its proton budget at once, save it.
+ * see the exact multipliers, the combined reaction and its proton budget at once, save it. A saved
+ * net reaction can be opened here again, changed and saved over (with the version it was read at).
  */
 @Component({
   selector: 'tl-net-composer',
-  imports: [EquationView, Fraction, FormulaText, MatButtonModule, MatCheckboxModule, MatChipsModule, MatFormFieldModule, MatIconModule, MatInputModule, ReactiveFormsModule],
+  imports: [EquationView, Fraction, FormulaText, MatButtonModule, MatCheckboxModule, MatChipsModule, MatFormFieldModule, MatIconModule, MatInputModule, MatTooltipModule, ReactiveFormsModule],
   templateUrl: './net-composer.html',
   styleUrl: './net-composer.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -40,6 +42,7 @@ const NET_STATUS_VIEWS: Readonly<Record<string, { label: string; icon: string; t
 export class NetComposer {
   private readonly store = inject(ReactionSetStore);
   private readonly notifier = inject(Notifier);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
 
   /** Whether the user may save net reactions. */
   readonly isEditable = input(false);
@@ -51,6 +54,8 @@ export class NetComposer {
   protected readonly cancel = signal<string[]>([]);
   protected readonly name = new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(200)] });
   protected readonly isSaving = signal(false);
+  /** The saved net reaction open in the composer, if one is being changed. */
+  protected readonly editing = signal<NetReaction | null>(null);
 
   protected readonly picked = computed(() => {
     const ids = this.pickedIds();
@@ -84,6 +89,25 @@ export class NetComposer {
     return this.picked()[index]?.name ?? '';
   }
 
+  /** Opens a saved net reaction in the composer: its reactions, fixed multipliers, cancelled species and name. */
+  protected edit(netReaction: NetReaction): void {
+    this.editing.set(netReaction);
+    this.pickedIds.set(netReaction.reactions.map((member) => member.reactionId));
+    this.fixed.set(Object.fromEntries(netReaction.reactions.filter((member) => member.multiplier).map((member) => [member.reactionId, member.multiplier ?? ''])));
+    this.cancel.set([...netReaction.cancel]);
+    this.name.setValue(netReaction.name);
+    this.host.nativeElement.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
+  }
+
+  /** Leaves the composer empty, dropping unsaved changes to an opened net reaction. */
+  protected clear(): void {
+    this.editing.set(null);
+    this.pickedIds.set([]);
+    this.fixed.set({});
+    this.cancel.set([]);
+    this.name.reset();
+  }
+
   protected save(): void {
     if (this.name.invalid || this.net().status !== 'combined') {
       this.name.markAsTouched();
@@ -95,11 +119,15 @@ export class NetComposer {
       reactions: this.picked().map((reaction) => ({ reactionId: reaction.id, multiplier: reaction.multiplier.trim() || null })),
       cancel: this.cancel().filter((formula) => this.species().includes(formula)),
     };
-    this.store.addNetReaction(body).subscribe({
+    const editing = this.editing();
+    const request = editing ? this.store.saveNetReaction(editing, body) : this.store.addNetReaction(body);
+    request.subscribe({
       next: (saved) => {
         this.isSaving.set(false);
-        this.notifier.success(`Net reaction “${saved?.name ?? body.name}” saved to the set.`);
-        this.name.reset();
+        const name = saved?.name ?? body.name;
+        this.notifier.success(editing ? `Net reaction “${name}” saved.` : `Net reaction “${name}” saved to the set.`);
+        if (editing) this.clear();
+        else this.name.reset();
       },
       error: (error: unknown) => {
         this.isSaving.set(false);
@@ -110,7 +138,10 @@ export class NetComposer {
 
   protected remove(netReaction: NetReaction): void {
     this.store.deleteNetReaction(netReaction).subscribe({
-      next: () => this.notifier.success(`Net reaction “${netReaction.name}” deleted.`),
+      next: () => {
+        if (this.editing()?.id === netReaction.id) this.clear();
+        this.notifier.success(`Net reaction “${netReaction.name}” deleted.`);
+      },
       error: (error: unknown) => this.notifier.problem(toProblem(error)),
     });
   }
