@@ -1,7 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
-import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTooltipModule } from '@angular/material/tooltip';
@@ -10,11 +9,9 @@ import type { RockSample } from '@tallus/contracts';
 
 import { FigurePipe } from '../../chem-view/figure/figure';
 import { describeProblem } from '../../core/error-messages';
-import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { ReportButton } from '../../reports/report-button/report-button';
-import { CsvImportDialog, type CsvImportDialogData } from '../../site-data/csv-import-dialog/csv-import-dialog';
-import { saveBlob } from '../../site-data/save-file';
+import { CsvTransfer, type CsvRecordsKind } from '../../site-data/csv-transfer';
 import { ScreeningCaution } from '../../site-data/screening-caution/screening-caution';
 import { TeamSettingsApi } from '../../site-data/team-settings-api';
 import { hasRoleAtLeast } from '../../teams/roles';
@@ -45,10 +42,17 @@ export class RockSamplesPage {
   private readonly api = inject(RockSamplesApi);
   private readonly settingsApi = inject(TeamSettingsApi);
   private readonly teamStore = inject(TeamStore);
-  private readonly dialog = inject(MatDialog);
-  private readonly notifier = inject(Notifier);
+  private readonly csv = inject(CsvTransfer);
 
   readonly teamId = input.required<string>();
+
+  private readonly csvKind: CsvRecordsKind = {
+    api: this.api,
+    title: 'Upload rock samples',
+    layout: 'One row per sample: sample, site, depth_from_m, depth_to_m, lithology, total_s_pct, sulfide_s_pct, sulfate_s_pct, np_kg_caco3_t, paste_ph, notes; optional mode:<mineral> and oxide:<oxide> columns in wt%.',
+    things: 'rock samples',
+    fileNames: { export: 'rock-samples-aba.csv', template: 'rock-samples-template.csv' },
+  };
 
   protected readonly samples = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
   protected readonly settings = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.settingsApi.get(teamId) });
@@ -79,31 +83,13 @@ export class RockSamplesPage {
   }
 
   protected upload(): void {
-    const data: CsvImportDialogData = {
-      title: 'Upload rock samples',
-      layout: 'One row per sample: sample, site, depth_from_m, depth_to_m, lithology, total_s_pct, sulfide_s_pct, sulfate_s_pct, np_kg_caco3_t, paste_ph, notes; optional mode:<mineral> and oxide:<oxide> columns in wt%.',
-      things: 'rock samples',
-      preview: (file) => this.api.preview(this.teamId(), file),
-      save: (file, skipInvalid) => this.api.import(this.teamId(), file, skipInvalid),
-      downloadTemplate: () => this.download('template'),
-    };
-    this.dialog
-      .open(CsvImportDialog, { data, width: '760px' })
-      .afterClosed()
-      .subscribe((count: number | undefined) => {
-        if (count === undefined) return;
-        this.notifier.success(`${count} rock samples saved.`);
-        this.samples.reload();
-      });
+    this.csv.upload(this.csvKind, this.teamId(), () => this.samples.reload());
   }
 
-  protected download(kind: 'export' | 'template'): void {
-    const call = kind === 'export' ? this.api.exportCsv(this.teamId()) : this.api.templateCsv(this.teamId());
-    call.subscribe({
-      next: (blob) => saveBlob(blob, kind === 'export' ? 'rock-samples-aba.csv' : 'rock-samples-template.csv'),
-      error: (error: unknown) => this.notifier.problem(toProblem(error)),
-    });
+  protected download(which: 'export' | 'template'): void {
+    this.csv.download(this.csvKind, this.teamId(), which);
   }
+
 
   protected settingsSaved(): void {
     this.settings.reload();

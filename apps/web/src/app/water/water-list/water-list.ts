@@ -1,7 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
-import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTooltipModule } from '@angular/material/tooltip';
@@ -10,10 +9,8 @@ import type { WaterAnalysis } from '@tallus/contracts';
 
 import { FigurePipe } from '../../chem-view/figure/figure';
 import { describeProblem } from '../../core/error-messages';
-import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
-import { CsvImportDialog, type CsvImportDialogData } from '../../site-data/csv-import-dialog/csv-import-dialog';
-import { saveBlob } from '../../site-data/save-file';
+import { CsvTransfer, type CsvRecordsKind } from '../../site-data/csv-transfer';
 import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { CBE_NOTE_WORDS, cbeView } from '../cbe-view';
@@ -30,11 +27,18 @@ import { WaterApi } from '../water-api';
 export class WaterList {
   private readonly api = inject(WaterApi);
   private readonly teamStore = inject(TeamStore);
-  private readonly dialog = inject(MatDialog);
-  private readonly notifier = inject(Notifier);
+  private readonly csv = inject(CsvTransfer);
 
   /** The team's id (route parameter). */
   readonly teamId = input.required<string>();
+
+  private readonly csvKind: CsvRecordsKind = {
+    api: this.api,
+    title: 'Upload water analyses',
+    layout: 'One row per sample: sample, site, date (YYYY-MM-DD), temperature_c, ph, notes, then one column per solute with its unit, e.g. “Ca (mg/L)”, “alkalinity (mg/L as CaCO3)”. Write values below detection as <0.01.',
+    things: 'water analyses',
+    fileNames: { export: 'water-analyses.csv', template: 'water-analyses-template.csv' },
+  };
 
   protected readonly analyses = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
   protected readonly canWrite = computed(() => {
@@ -58,29 +62,10 @@ export class WaterList {
   }
 
   protected upload(): void {
-    const data: CsvImportDialogData = {
-      title: 'Upload water analyses',
-      layout: 'One row per sample: sample, site, date (YYYY-MM-DD), temperature_c, ph, notes, then one column per solute with its unit, e.g. “Ca (mg/L)”, “alkalinity (mg/L as CaCO3)”. Write values below detection as <0.01.',
-      things: 'water analyses',
-      preview: (file) => this.api.preview(this.teamId(), file),
-      save: (file, skipInvalid) => this.api.import(this.teamId(), file, skipInvalid),
-      downloadTemplate: () => this.download('template'),
-    };
-    this.dialog
-      .open(CsvImportDialog, { data, width: '760px' })
-      .afterClosed()
-      .subscribe((count: number | undefined) => {
-        if (count === undefined) return;
-        this.notifier.success(`${count} water analyses saved.`);
-        this.analyses.reload();
-      });
+    this.csv.upload(this.csvKind, this.teamId(), () => this.analyses.reload());
   }
 
-  protected download(kind: 'export' | 'template'): void {
-    const call = kind === 'export' ? this.api.exportCsv(this.teamId()) : this.api.templateCsv(this.teamId());
-    call.subscribe({
-      next: (blob) => saveBlob(blob, kind === 'export' ? 'water-analyses.csv' : 'water-analyses-template.csv'),
-      error: (error: unknown) => this.notifier.problem(toProblem(error)),
-    });
+  protected download(which: 'export' | 'template'): void {
+    this.csv.download(this.csvKind, this.teamId(), which);
   }
 }
