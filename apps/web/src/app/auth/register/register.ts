@@ -2,7 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, signal } f
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
@@ -13,6 +12,7 @@ import { showProblemAtFields } from '../../core/form-problems';
 import { toProblem } from '../../core/problem';
 import { notBlank } from '../../core/validators';
 import { AuthFrame } from '../auth-frame/auth-frame';
+import { PasswordField } from '../password-field/password-field';
 import { AuthStore } from '../auth-store';
 
 /** The shortest password the API accepts. */
@@ -28,9 +28,9 @@ const FIELDS_BY_CODE = { AUTH_EMAIL_TAKEN: 'email' } as const;
     AuthFrame,
     MatButtonModule,
     MatFormFieldModule,
-    MatIconModule,
     MatInputModule,
     MatProgressBarModule,
+    PasswordField,
     ReactiveFormsModule,
     RouterLink,
   ],
@@ -51,7 +51,6 @@ export class Register {
     password: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
   });
   protected readonly isSubmitting = signal(false);
-  protected readonly isPasswordVisible = signal(false);
   protected readonly formError = signal<string | null>(null);
   protected readonly isForInvitation = computed(() =>
     safeReturnUrl(this.returnUrl()).startsWith('/invitations/accept'),

@@ -2,7 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, signal } f
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
@@ -12,6 +11,7 @@ import { describeProblem, describeValidationErrors } from '../../core/error-mess
 import { showProblemAtFields } from '../../core/form-problems';
 import { toProblem } from '../../core/problem';
 import { AuthFrame } from '../auth-frame/auth-frame';
+import { PasswordField } from '../password-field/password-field';
 import { AuthStore } from '../auth-store';
 
 /** Sign-in with e-mail and password. */
@@ -21,9 +21,9 @@ import { AuthStore } from '../auth-store';
     AuthFrame,
     MatButtonModule,
     MatFormFieldModule,
-    MatIconModule,
     MatInputModule,
     MatProgressBarModule,
+    PasswordField,
     ReactiveFormsModule,
     RouterLink,
   ],
@@ -45,7 +45,6 @@ export class SignIn {
     password: ['', [Validators.required]],
   });
   protected readonly isSubmitting = signal(false);
-  protected readonly isPasswordVisible = signal(false);
   protected readonly formError = signal<string | null>(null);
   protected readonly isForInvitation = computed(() =>
     safeReturnUrl(this.returnUrl()).startsWith('/invitations/accept'),
