@@ -160,6 +160,23 @@ describe('water-analysis CSV', () => {
     expect(again.solutes).toEqual(imported.body.created[0].solutes);
   });
 
+  it('When a laboratory reports trace iron in µg/L, then it is stored as reported, converted through M(Fe) = 55.845 g/mol (IUPAC 2021), and exported in the same unit', async () => {
+    const csv = ['sample,Ca (mg/L),Fe (µg/L),Mn (ug/L)', 'T-1,40.078,55.845,<5'].join('\n');
+
+    const imported = await uploadCsv(app(), editor, `/api/teams/${teamId}/water-analyses/import`, csv).expect(201);
+    const exported = await request(app()).get(`/api/teams/${teamId}/water-analyses/export.csv`).set('Authorization', editor.auth).expect(200);
+
+    const [water] = imported.body.created;
+    expect(water.solutes.Fe).toEqual({ value: '55.845', unit: 'µg/L' });
+    expect(water.converted.Fe.mmolPerL).toBeCloseTo(0.001, 12);
+    expect(water.converted.Fe.meqPerL).toBeCloseTo(0.002, 12);
+    expect(water.converted.Mn).toMatchObject({ belowDetection: true, detectionLimit: 5 });
+    const [head, ...rows] = exported.text.trim().split('\n');
+    const columns = head!.split(',');
+    const row = rows.find((line) => line.startsWith('T-1,'))!.split(',');
+    expect(row[columns.indexOf('Fe (µg/L)')]).toBe('55.845');
+  });
+
   it('When the template is downloaded, then it has the documented layout', async () => {
     const template = await request(app()).get(`/api/teams/${teamId}/water-analyses/template.csv`).set('Authorization', editor.auth).expect(200);
     expect(template.text.split('\n')[0]).toMatch(/^sample,site,date,temperature_c,ph,notes,Ca \(mg\/L\),/);

@@ -77,6 +77,7 @@ export { findSolute, requireSolute, SOLUTES } from './water/solutes';
 export type { Solute } from './water/solutes';
 export {
   CACO3_MG_PER_MEQ,
+  ASCII_UNIT_ALIASES,
   CONCENTRATION_UNITS,
   isConcentrationUnit,
   parseConcentration,

@@ -18,7 +18,7 @@ import { csvImportResponseSchemaOf, csvPreviewSchemaOf } from './csv-import';
 /** Id of a water analysis in a route; anything else answers 404. */
 export const waterAnalysisIdSchema = z.uuid();
 
-/** One reported solute: a number, or text such as `"12.5"` or `"<0.01"` (below detection), and its unit (`mg/L`, `mmol/L`, `µmol/L`, `meq/L`, `mg/L as CaCO3`, `mg/L as HCO3`). */
+/** One reported solute: a number, or text such as `"12.5"` or `"<0.01"` (below detection), and its unit (`mg/L`, `µg/L`, `mmol/L`, `µmol/L`, `meq/L`, `mg/L as CaCO3`, `mg/L as HCO3`). */
 export const soluteEntrySchema = z.object({
   value: z.union([z.number().nonnegative(), z.string().trim().min(1).max(40)]),
   unit: z.string().trim().min(1).max(40),

@@ -6,11 +6,17 @@ import { molarMassExact } from '../convert/molar-mass';
 import { ChemError } from '../errors/chem-error';
 import { type Solute } from './solutes';
 
-/** Units a solute concentration may be given in. `umol/L` is accepted for `µmol/L`. */
-export const CONCENTRATION_UNITS = ['mg/L', 'mmol/L', 'µmol/L', 'umol/L', 'meq/L', 'mg/L as CaCO3', 'mg/L as HCO3'] as const;
+/**
+ * Units a solute concentration may be given in. `µg/L` is how laboratories report trace metals
+ * (Fe, Mn, Al, Zn); `umol/L` and `ug/L` are accepted for `µmol/L` and `µg/L`.
+ */
+export const CONCENTRATION_UNITS = ['mg/L', 'µg/L', 'ug/L', 'mmol/L', 'µmol/L', 'umol/L', 'meq/L', 'mg/L as CaCO3', 'mg/L as HCO3'] as const;
 
 /** A unit from {@link CONCENTRATION_UNITS}. */
 export type ConcentrationUnit = (typeof CONCENTRATION_UNITS)[number];
+
+/** Spellings of {@link CONCENTRATION_UNITS} kept for typing without a µ key; forms offer only the µ forms. */
+export const ASCII_UNIT_ALIASES: readonly ConcentrationUnit[] = ['ug/L', 'umol/L'];
 
 /** A parsed concentration: below detection it keeps the limit, never a zero. */
 export interface Concentration {
@@ -78,6 +84,9 @@ export function toMillimolesPerLitre(solute: Solute, value: number, unit: string
   switch (unit) {
     case 'mg/L':
       return value / molarMassExact(solute.formula).toNumber();
+    case 'µg/L':
+    case 'ug/L':
+      return value / 1000 / molarMassExact(solute.formula).toNumber();
     case 'mmol/L':
       return value;
     case 'µmol/L':

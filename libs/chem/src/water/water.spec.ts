@@ -42,6 +42,8 @@ describe('unit conversions against the IUPAC 2021 abridged molar masses (compute
     ['Si', 28.085, 'mg/L', 1, 0],
     ['DIC', 12.011, 'mg/L', 1, 0],
     ['Na', 250, 'µmol/L', 0.25, 0.25],
+    ['Fe', 55.845, 'µg/L', 0.001, 0.002],
+    ['Mn', 54.938, 'ug/L', 0.001, 0.002],
     ['Mg', 3, 'meq/L', 1.5, 3],
     ['Al', 26.982, 'mg/L', 1, 3],
   ])('%s %d %s is %d mmol/L and %d meq/L', (key, value, unit, mmol, meq) => {

@@ -9,7 +9,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { Router, RouterLink } from '@angular/router';
-import { CONCENTRATION_UNITS, SOLUTES } from '@tallus/chem';
+import { ASCII_UNIT_ALIASES, CONCENTRATION_UNITS, SOLUTES } from '@tallus/chem';
 import type { WaterAnalysis } from '@tallus/contracts';
 import { debounceTime, map, startWith } from 'rxjs';
 
@@ -50,7 +50,7 @@ export class WaterEditor {
   readonly analysisId = input.required<string>();
 
   protected readonly solutes = SOLUTES;
-  protected readonly units = CONCENTRATION_UNITS.filter((unit) => unit !== 'umol/L');
+  protected readonly units = CONCENTRATION_UNITS.filter((unit) => !ASCII_UNIT_ALIASES.includes(unit));
   protected readonly noteWords = CBE_NOTE_WORDS;
   protected readonly form = new FormGroup({
     name: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
