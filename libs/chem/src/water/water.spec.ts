@@ -1,6 +1,8 @@
+import { unit } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { isChemError } from '../errors/chem-error';
 import { chargeBalance, type WaterAnalysis } from './charge-balance';
+import { molarMassExact } from '../convert/molar-mass';
 import { parseConcentration, toMilliequivalentsPerLitre, toMillimolesPerLitre } from './concentration';
 import { findSolute, requireSolute } from './solutes';
 
@@ -50,6 +52,20 @@ describe('unit conversions against the IUPAC 2021 abridged molar masses (compute
     const solute = requireSolute(key, key);
     expect(toMillimolesPerLitre(solute, value, unit)).toBeCloseTo(mmol, 12);
     expect(toMilliequivalentsPerLitre(solute, value, unit)).toBeCloseTo(meq, 12);
+  });
+
+  it.each([
+    ['Fe', 55.845, 'µg/L', 'ug / L'],
+    ['Ca', 40.078, 'mg/L', 'mg / L'],
+    ['Na', 250, 'µmol/L', 'umol / L'],
+    ['Zn', 7.5, 'ug/L', 'ug / L'],
+  ])('%s %d %s: the plain unit arithmetic agrees with mathjs 15 unit system (a general-purpose reference library)', (key, value, tallusUnit, mathjsUnit) => {
+    const solute = requireSolute(key, key);
+    const molarMass = unit(molarMassExact(solute.formula).toNumber(), 'g / mol');
+    const given = unit(value, mathjsUnit);
+    // mathjs divides a mass concentration by the molar mass; an amount concentration is converted as it is.
+    const reference = given.equalBase(unit('mg / L')) ? given.divide(molarMass) : given;
+    expect(toMillimolesPerLitre(solute, value, tallusUnit)).toBeCloseTo(reference.toNumber('mmol / L'), 12);
   });
 
   it('uses 50.043 mg CaCO3 per meq (M(CaCO3)/2, Standard Methods 2320)', () => {
