@@ -138,6 +138,37 @@ describe('A consultant works through the site data of Kestrel Flats', () => {
     await screenshot(page, 'site-data-05-rock-samples');
   });
 
+  it('When they add a sample by hand and then correct its sulfide S, then its AP follows (31.25 × sulfide S, Sobek et al. 1978), and it can be deleted', async () => {
+    const { page } = editor;
+    const name = `JR-HAND-${suffix}`;
+    const rowOf = () => page.locator('table[aria-label^="Rock samples"] tbody tr').filter({ has: page.getByRole('button', { name, exact: true }) });
+    await page.getByRole('button', { name: 'Add sample' }).click();
+    const form = page.getByRole('dialog');
+    await form.getByLabel('Sample', { exact: true }).fill(name);
+    await form.getByLabel('Depth from (m)').fill('5');
+    await form.getByLabel('Depth to (m)').fill('2');
+    await form.getByLabel('Sulfide S (wt%)').fill('1.6');
+    await form.getByLabel('Measured NP (kg CaCO₃/t)').fill('20');
+    await form.getByRole('button', { name: 'Add sample' }).click();
+    await expect.poll(() => form.getByText('The interval ends above where it starts').count()).toBe(1);
+    await screenshot(page, 'site-data-05b-sample-form');
+    await form.getByLabel('Depth to (m)').fill('8');
+    await form.getByRole('button', { name: 'Add sample' }).click();
+
+    // Invented sample: AP = 31.25 × 1.6 = 50.0 kg CaCO3/t; NNP = 20 − 50 = −30.
+    await expect.poll(async () => (await rowOf().locator('td').allTextContents()).map((text) => text.trim()), { timeout: 15_000 }).toContain('50.0');
+    expect((await rowOf().locator('td').allTextContents()).map((text) => text.trim())).toContain('−30.0');
+    await page.getByRole('button', { name: 'Correct this sample' }).click();
+    await expect.poll(() => form.getByLabel('Sulfide S (wt%)').inputValue()).toBe('1.6');
+    await form.getByLabel('Sulfide S (wt%)').fill('0.8');
+    await form.getByRole('button', { name: 'Save changes' }).click();
+    await expect.poll(async () => (await rowOf().locator('td').allTextContents()).map((text) => text.trim())).toContain('25.0');
+
+    page.once('dialog', (dialog) => void dialog.accept());
+    await page.getByRole('button', { name: 'Delete', exact: true }).click();
+    await expect.poll(() => rowOf().count()).toBe(0);
+  });
+
   it('When they recalculate a plagioclase analysis, then its formula and An content appear as they type', async () => {
     const { page } = editor;
     await page.goto(`${teamUrl}/mineral-formulas`);

@@ -26,6 +26,8 @@ describe('describeValidationErrors', () => {
     { errors: { required: true }, text: 'Required.' },
     { errors: { minlength: { requiredLength: 10, actualLength: 3 } }, text: 'Use at least 10 characters.' },
     { errors: { server: 'E-mail taken' }, text: 'E-mail taken' },
+    { errors: { min: { min: 0, actual: -1 } }, text: 'Give 0 or more.' },
+    { errors: { max: { max: 100, actual: 120 } }, text: 'Give 100 or less.' },
   ])('describes $errors', ({ errors, text }) => {
     expect(describeValidationErrors(errors)).toBe(text);
   });

@@ -50,7 +50,14 @@ const messagesByValidator: Readonly<Record<string, (details: unknown) => string>
   minlength: (details) => `Use at least ${requiredLength(details)} characters.`,
   maxlength: (details) => `Use at most ${requiredLength(details)} characters.`,
   whitespace: () => 'Must contain more than spaces.',
+  min: (details) => `Give ${boundOf(details, 'min')} or more.`,
+  max: (details) => `Give ${boundOf(details, 'max')} or less.`,
 };
+
+/** The limit of a `min` or `max` validator's error details. */
+function boundOf(details: unknown, key: 'min' | 'max'): string {
+  return typeof details === 'object' && details !== null && key in details ? String((details as Record<string, unknown>)[key]) : 'a value in range';
+}
 
 /**
  * The text to show for a whole problem (snackbar or form banner): the code's own

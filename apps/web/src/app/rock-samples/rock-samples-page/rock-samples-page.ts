@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTooltipModule } from '@angular/material/tooltip';
@@ -9,6 +10,7 @@ import type { RockSample } from '@tallus/contracts';
 
 import { FigurePipe } from '../../chem-view/figure/figure';
 import { describeProblem } from '../../core/error-messages';
+import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { ReportButton } from '../../reports/report-button/report-button';
 import { CsvTransfer, type CsvRecordsKind } from '../../site-data/csv-transfer';
@@ -22,6 +24,7 @@ import { NpApPlot } from '../np-ap-plot/np-ap-plot';
 import { npApPoints } from '../np-ap-plot/np-ap-points';
 import { RockSamplesApi } from '../rock-samples-api';
 import { SampleDetail } from '../sample-detail/sample-detail';
+import { SampleForm, type SampleFormData } from '../sample-form/sample-form';
 
 /** Short words for the per-sample flags. */
 const FLAG_WORDS: Readonly<Partial<Record<string, string>>> = {
@@ -43,6 +46,8 @@ export class RockSamplesPage {
   private readonly settingsApi = inject(TeamSettingsApi);
   private readonly teamStore = inject(TeamStore);
   private readonly csv = inject(CsvTransfer);
+  private readonly dialog = inject(MatDialog);
+  private readonly notifier = inject(Notifier);
 
   readonly teamId = input.required<string>();
 
@@ -80,6 +85,32 @@ export class RockSamplesPage {
 
   protected toggle(sample: RockSample): void {
     this.selectedId.set(this.selectedId() === sample.id ? null : sample.id);
+  }
+
+  /** Opens the sample form: empty to add a sample, filled to correct one. */
+  protected openForm(sample?: RockSample): void {
+    const data: SampleFormData = { teamId: this.teamId(), sample };
+    this.dialog
+      .open<SampleForm, SampleFormData, RockSample>(SampleForm, { data, maxWidth: '860px' })
+      .afterClosed()
+      .subscribe((saved) => {
+        if (!saved) return;
+        this.notifier.success(sample ? `Rock sample “${saved.name}” saved.` : `Rock sample “${saved.name}” added.`);
+        this.selectedId.set(saved.id);
+        this.samples.reload();
+      });
+  }
+
+  protected remove(sample: RockSample): void {
+    if (!confirm(`Delete the rock sample “${sample.name}”? Its ABA and CO₂ figures go with it.`)) return;
+    this.api.delete(sample.id, sample.version).subscribe({
+      next: () => {
+        this.notifier.success(`Rock sample “${sample.name}” deleted.`);
+        this.selectedId.set(null);
+        this.samples.reload();
+      },
+      error: (error: unknown) => this.notifier.problem(toProblem(error)),
+    });
   }
 
   protected upload(): void {
