@@ -3,6 +3,7 @@ import { Observable, of, tap } from 'rxjs';
 import type { TeamSummary } from '@tallus/contracts';
 
 import { AuthStore } from '../auth/auth-store';
+import { hasRoleAtLeast } from './roles';
 import { TeamsApi } from './teams-api';
 
 /** Key of the last team the user worked in, so the start page can return to it. */
@@ -31,6 +32,11 @@ export class TeamStore {
   );
   /** Whether the user owns the current team (manages members and invitations). */
   readonly isOwner = computed(() => this.currentTeam()?.role === 'owner');
+  /** Whether the user may write in the current team (editor or above). */
+  readonly canWrite = computed(() => {
+    const team = this.currentTeam();
+    return team ? hasRoleAtLeast(team.role, 'editor') : false;
+  });
 
   /** Loads the user's teams from the API. */
   load(): Observable<TeamSummary[]> {

@@ -19,7 +19,6 @@ import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { fileNameOf, saveBlob } from '../../site-data/save-file';
 import { SpeciesApi } from '../../species/species-api';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { WaterApi } from '../../water/water-api';
 import { MassBalanceApi } from '../mass-balance-api';
@@ -56,10 +55,7 @@ export class ModelEditor {
     params: () => this.teamId(),
     stream: ({ params: teamId }) => forkJoin([this.speciesApi.listTeamSpecies(teamId), this.speciesApi.listBuiltin()]).pipe(map(([own, builtin]) => [...own, ...builtin])),
   });
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   private readonly value = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
   protected readonly elements = computed(() => {
     const value = this.value();

@@ -8,7 +8,6 @@ import type { MassBalanceModel } from '@tallus/contracts';
 
 import { describeProblem } from '../../core/error-messages';
 import { toProblem } from '../../core/problem';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { MassBalanceApi } from '../mass-balance-api';
 
@@ -27,10 +26,7 @@ export class ModelList {
   readonly teamId = input.required<string>();
 
   protected readonly models = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   protected readonly loadError = computed(() => {
     const error = this.models.error();
     return error ? describeProblem(toProblem(error)) : null;

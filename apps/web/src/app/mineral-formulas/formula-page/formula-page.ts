@@ -21,7 +21,6 @@ import { toProblem } from '../../core/problem';
 import { ReactionSetsApi } from '../../reaction-sets/reaction-sets-api';
 import { ScreeningCaution } from '../../site-data/screening-caution/screening-caution';
 import { saveBlob } from '../../site-data/save-file';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { readPastedOxides, type PasteProblem } from '../oxide-paste';
 import { createOxideForm, EXAMPLES, GROUP_OPTIONS, MAIN_OXIDES, MORE_OXIDES, oxideInputOf } from '../oxide-form/oxide-form';
@@ -83,10 +82,7 @@ export class FormulaPage {
     const group = this.groups.find((entry) => entry.key === this.value().group);
     return group ? `Default for the group: ${group.oxygens} O` : 'No group: give the oxygens';
   });
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   protected readonly saved = rxResource({
     params: () => this.teamId(),
     stream: ({ params: teamId }) => this.api.list(teamId),

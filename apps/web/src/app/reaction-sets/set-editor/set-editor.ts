@@ -15,7 +15,6 @@ import { toProblem } from '../../core/problem';
 import { NetComposer } from '../../net-reactions/net-composer/net-composer';
 import { ProtonChart } from '../../net-reactions/proton-chart/proton-chart';
 import { ReviewPanel } from '../../review/review-panel/review-panel';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { ReactionEditor } from '../reaction-editor/reaction-editor';
 import { ReactionList, ReactionMove } from '../reaction-list/reaction-list';
@@ -68,10 +67,7 @@ export class SetEditor {
   protected readonly loadError = signal<string | null>(null);
   /** Id of the reaction open in the editor; `new` for one being added. */
   protected readonly openId = signal<string | null>(null);
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   protected readonly isEditable = computed(() => this.canWrite() && this.store.isEditable());
   protected readonly openReaction = computed(() => this.reactions().find((reaction) => reaction.id === this.openId()) ?? null);
   protected readonly stateView = computed(() => {

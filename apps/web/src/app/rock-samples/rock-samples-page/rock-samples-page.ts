@@ -16,7 +16,6 @@ import { ReportButton } from '../../reports/report-button/report-button';
 import { CsvTransfer, type CsvRecordsKind } from '../../site-data/csv-transfer';
 import { ScreeningCaution } from '../../site-data/screening-caution/screening-caution';
 import { TeamSettingsApi } from '../../site-data/team-settings-api';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { abaClassView } from '../aba-class-view';
 import { BandSettings } from '../band-settings/band-settings';
@@ -67,10 +66,7 @@ export class RockSamplesPage {
   protected readonly bands = computed(() => this.settings.value()?.nprBands ?? { acidGenerating: 1, nonAcidGenerating: 3 });
   protected readonly sites = computed(() => [...new Set((this.samples.value() ?? []).map((sample) => sample.site).filter((site) => site !== ''))]);
   protected readonly totalSulfurCount = computed(() => (this.samples.value() ?? []).filter((sample) => sample.aba?.sulfurBasis === 'total').length);
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   protected readonly isOwner = this.teamStore.isOwner;
   protected readonly loadError = computed(() => {
     const error = this.samples.error();

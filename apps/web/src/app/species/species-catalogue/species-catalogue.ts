@@ -16,7 +16,6 @@ import { forkJoin, map } from 'rxjs';
 import { describeProblem } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { SpeciesApi } from '../species-api';
 import { SpeciesDialog } from '../species-dialog/species-dialog';
@@ -55,10 +54,7 @@ export class SpeciesCatalogue {
   protected readonly columns = ['name', 'formula', 'phase', 'molarMass', 'oxidationStates', 'source', 'actions'];
   protected readonly dataSource = new MatTableDataSource<Species>([]);
   protected readonly filter = signal('');
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   protected readonly species = rxResource({
     params: () => this.teamId(),
     stream: ({ params: teamId }) =>

@@ -19,7 +19,6 @@ import { showProblemAtFields } from '../../core/form-problems';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { TeamSettingsApi } from '../../site-data/team-settings-api';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { CBE_NOTE_WORDS, cbeView } from '../cbe-view';
 import { WaterApi } from '../water-api';
@@ -68,10 +67,7 @@ export class WaterEditor {
     stream: ({ params: id }) => this.api.get(id),
   });
   protected readonly settings = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.settingsApi.get(teamId) });
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   private readonly value = toSignal(this.form.valueChanges.pipe(debounceTime(80), startWith(null), map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
   protected readonly live = computed(() => {
     const settings = this.settings.value();

@@ -11,7 +11,6 @@ import { FigurePipe } from '../../chem-view/figure/figure';
 import { describeProblem } from '../../core/error-messages';
 import { toProblem } from '../../core/problem';
 import { CsvTransfer, type CsvRecordsKind } from '../../site-data/csv-transfer';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { CBE_NOTE_WORDS, cbeView } from '../cbe-view';
 import { WaterApi } from '../water-api';
@@ -41,10 +40,7 @@ export class WaterList {
   };
 
   protected readonly analyses = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
-  protected readonly canWrite = computed(() => {
-    const team = this.teamStore.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
   protected readonly loadError = computed(() => {
     const error = this.analyses.error();
     return error ? describeProblem(toProblem(error)) : null;
