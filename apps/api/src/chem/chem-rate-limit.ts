@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { RateLimitedError } from '../errors/app-errors';
-import { currentUser } from '../http/locals';
+import { currentUserId } from '../http/locals';
 
 /**
  * Per-user rate limit of the stateless computation routes, so that one account
@@ -16,7 +16,7 @@ export function createChemRateLimit(perMinute: number): RequestHandler {
     limit: perMinute,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (_req, res) => currentUser(res).id,
+    keyGenerator: (_req, res) => currentUserId(res),
     handler: (_req, res, next) => {
       res.setHeader('Retry-After', '60');
       next(new RateLimitedError('CHEM_RATE_LIMITED', `More than ${perMinute} computations in a minute; wait a moment.`));

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { copyPublicationRequestSchema, publicationIdSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody, parseIdParam } from '../http/validate';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
@@ -17,7 +17,7 @@ export function libraryRoutes(em: EntityManager, requireUser: RequestHandler): R
   const router = Router();
 
   router.post('/reaction-sets/:id/publish', requireUser, requireRecordRole(em, RECORD_KINDS.reactionSet, 'owner'), async (_req, res) => {
-    res.status(201).json(await publishSet(em, currentRecordId(res), currentUser(res).id));
+    res.status(201).json(await publishSet(em, currentRecordId(res), currentUserId(res)));
   });
 
   router.get('/library', requireUser, async (_req, res) => {
@@ -36,7 +36,7 @@ export function libraryRoutes(em: EntityManager, requireUser: RequestHandler): R
 
   router.post('/library/:publicationId/copy', requireUser, targetTeam, requireTeamRole(em, 'editor'), async (req, res) => {
     const publicationId = parseIdParam(publicationIdSchema, req.params['publicationId'], 'PUBLICATION_NOT_FOUND');
-    res.status(201).json(await copyPublication(em, { publicationId, teamId: currentMembership(res).team.id, actorId: currentUser(res).id }));
+    res.status(201).json(await copyPublication(em, { publicationId, teamId: currentMembership(res).team.id, actorId: currentUserId(res) }));
   });
 
   return router;

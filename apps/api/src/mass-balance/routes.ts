@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { createMassBalanceModelRequestSchema, updateMassBalanceModelRequestSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { SITE_RECORD_KINDS } from '../site-data/record-kinds';
 import { downloadName } from '../site-data/upload';
@@ -21,7 +21,7 @@ export function massBalanceRoutes(em: EntityManager, requireUser: RequestHandler
   const router = Router();
   const base = '/teams/:teamId/mass-balance-models';
   const asRecord = (role: 'viewer' | 'editor') => requireRecordRole(em, SITE_RECORD_KINDS.massBalanceModel, role);
-  const actorId = (res: Parameters<RequestHandler>[1]) => currentUser(res).id;
+  const actorId = (res: Parameters<RequestHandler>[1]) => currentUserId(res);
 
   router.get(base, requireUser, requireTeamRole(em, 'viewer'), async (_req, res) => {
     const models = await em.find(MassBalanceModel, { team: currentMembership(res).team.id }, { orderBy: { name: 'asc', createdAt: 'asc' } });

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { recalculateFormulaRequestSchema, saveMineralFormulaRequestSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentUser } from '../http/locals';
+import { currentMembership, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { writeCsv } from '../site-data/csv-table';
 import { downloadName } from '../site-data/upload';
@@ -30,7 +30,7 @@ export function mineralFormulaRoutes(em: EntityManager, requireUser: RequestHand
 
   router.post(base, requireUser, requireTeamRole(em, 'editor'), async (req, res) => {
     const request = parseBody(saveMineralFormulaRequestSchema, req.body);
-    res.status(201).json(await saveMineralFormula(em, { teamId: currentMembership(res).team.id, actorId: currentUser(res).id, request }));
+    res.status(201).json(await saveMineralFormula(em, { teamId: currentMembership(res).team.id, actorId: currentUserId(res), request }));
   });
 
   router.get(`${base}/export.csv`, requireUser, requireTeamRole(em, 'viewer'), async (_req, res) => {

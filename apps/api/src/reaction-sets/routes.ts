@@ -10,7 +10,7 @@ import {
   updateReactionSetRequestSchema,
 } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { createNetReaction, deleteNetReaction, updateNetReaction } from '../net-reactions/save-net-reaction';
 import { ReactionsJsonCache } from '../reactions/reactions-json-cache';
@@ -36,7 +36,7 @@ export function reactionSetRoutes(em: EntityManager, requireUser: RequestHandler
   const asSet = (role: 'viewer' | 'editor') => requireRecordRole(em, RECORD_KINDS.reactionSet, role);
   const asReaction = requireRecordRole(em, RECORD_KINDS.reaction, 'editor');
   const asNet = requireRecordRole(em, RECORD_KINDS.netReaction, 'editor');
-  const actorId = (res: Parameters<RequestHandler>[1]) => currentUser(res).id;
+  const actorId = (res: Parameters<RequestHandler>[1]) => currentUserId(res);
 
   router.get('/teams/:teamId/reaction-sets', requireUser, requireTeamRole(em, 'viewer'), async (req, res) => {
     const { state } = parseBody(reactionSetListQuerySchema, req.query);

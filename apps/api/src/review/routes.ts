@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { approveReviewRequestSchema, returnReviewRequestSchema, submitReviewRequestSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
-import { currentRecordId, currentUser } from '../http/locals';
+import { currentRecordId, currentUserId } from '../http/locals';
 import { parseBody, parseIdParam } from '../http/validate';
 import type { Mailer } from '../mail/mailer';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
@@ -31,17 +31,17 @@ export function reviewRoutes({ em, mailer, requireUser, publicOrigin }: ReviewRo
 
   router.post('/reaction-sets/:id/submit', requireUser, asSet('editor'), async (req, res) => {
     const { comment, version } = parseBody(submitReviewRequestSchema, req.body);
-    res.json(await runReviewStep(em, services, { step: 'submitted', setId: currentRecordId(res), actorId: currentUser(res).id, comment: comment ?? '', version }));
+    res.json(await runReviewStep(em, services, { step: 'submitted', setId: currentRecordId(res), actorId: currentUserId(res), comment: comment ?? '', version }));
   });
 
   router.post('/reaction-sets/:id/approve', requireUser, asSet('reviewer'), async (req, res) => {
     const { comment, version } = parseBody(approveReviewRequestSchema, req.body);
-    res.json(await runReviewStep(em, services, { step: 'approved', setId: currentRecordId(res), actorId: currentUser(res).id, comment: comment ?? '', version }));
+    res.json(await runReviewStep(em, services, { step: 'approved', setId: currentRecordId(res), actorId: currentUserId(res), comment: comment ?? '', version }));
   });
 
   router.post('/reaction-sets/:id/return', requireUser, asSet('reviewer'), async (req, res) => {
     const { comment, version } = parseBody(returnReviewRequestSchema, req.body);
-    res.json(await runReviewStep(em, services, { step: 'returned', setId: currentRecordId(res), actorId: currentUser(res).id, comment, version }));
+    res.json(await runReviewStep(em, services, { step: 'returned', setId: currentRecordId(res), actorId: currentUserId(res), comment, version }));
   });
 
   router.get('/reaction-sets/:id/revisions', requireUser, asSet('viewer'), async (_req, res) => {

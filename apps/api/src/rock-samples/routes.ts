@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { createRockSampleRequestSchema, rockSampleListQuerySchema, updateRockSampleRequestSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { SITE_RECORD_KINDS } from '../site-data/record-kinds';
 import { csvUpload, downloadName, uploadedCsv } from '../site-data/upload';
@@ -33,7 +33,7 @@ export function rockSampleRoutes(em: EntityManager, requireUser: RequestHandler)
 
   router.post(base, requireUser, requireTeamRole(em, 'editor'), async (req, res) => {
     const request = parseBody(createRockSampleRequestSchema, req.body);
-    res.status(201).json(await createRockSample(em, { teamId: teamId(res), actorId: currentUser(res).id, request }));
+    res.status(201).json(await createRockSample(em, { teamId: teamId(res), actorId: currentUserId(res), request }));
   });
 
   router.get(`${base}/export.csv`, requireUser, requireTeamRole(em, 'viewer'), async (_req, res) => {
@@ -50,7 +50,7 @@ export function rockSampleRoutes(em: EntityManager, requireUser: RequestHandler)
   });
 
   router.post(`${base}/import`, requireUser, requireTeamRole(em, 'editor'), csvUpload(), async (req, res) => {
-    res.status(201).json(await importRockCsv(em, { teamId: teamId(res), actorId: currentUser(res).id, ...uploadedCsv(req) }));
+    res.status(201).json(await importRockCsv(em, { teamId: teamId(res), actorId: currentUserId(res), ...uploadedCsv(req) }));
   });
 
   router.get('/rock-samples/:id', requireUser, asRecord('viewer'), async (_req, res) => {
@@ -60,11 +60,11 @@ export function rockSampleRoutes(em: EntityManager, requireUser: RequestHandler)
 
   router.patch('/rock-samples/:id', requireUser, asRecord('editor'), async (req, res) => {
     const request = parseBody(updateRockSampleRequestSchema, req.body);
-    res.json(await updateRockSample(em, { id: currentRecordId(res), actorId: currentUser(res).id, request }));
+    res.json(await updateRockSample(em, { id: currentRecordId(res), actorId: currentUserId(res), request }));
   });
 
   router.delete('/rock-samples/:id', requireUser, asRecord('editor'), async (_req, res) => {
-    await deleteRockSample(em, currentRecordId(res), currentUser(res).id);
+    await deleteRockSample(em, currentRecordId(res), currentUserId(res));
     res.status(204).end();
   });
 

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { createSpeciesRequestSchema, updateSpeciesRequestSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
@@ -30,7 +30,7 @@ export function speciesRoutes(em: EntityManager, requireUser: RequestHandler): R
 
   router.post('/teams/:teamId/species', requireUser, requireTeamRole(em, 'editor'), async (req, res) => {
     const request = parseBody(createSpeciesRequestSchema, req.body);
-    res.status(201).json(await createSpecies(em, { teamId: currentMembership(res).team.id, actorId: currentUser(res).id, request }));
+    res.status(201).json(await createSpecies(em, { teamId: currentMembership(res).team.id, actorId: currentUserId(res), request }));
   });
 
   router.get('/species/:id', requireUser, requireRecordRole(em, kind, 'viewer'), async (_req, res) => {
@@ -39,11 +39,11 @@ export function speciesRoutes(em: EntityManager, requireUser: RequestHandler): R
 
   router.patch('/species/:id', requireUser, requireRecordRole(em, kind, 'editor'), async (req, res) => {
     const request = parseBody(updateSpeciesRequestSchema, req.body);
-    res.json(await updateSpecies(em, { speciesId: currentRecordId(res), actorId: currentUser(res).id, request }));
+    res.json(await updateSpecies(em, { speciesId: currentRecordId(res), actorId: currentUserId(res), request }));
   });
 
   router.delete('/species/:id', requireUser, requireRecordRole(em, kind, 'editor'), async (_req, res) => {
-    await deleteSpecies(em, currentRecordId(res), currentUser(res).id);
+    await deleteSpecies(em, currentRecordId(res), currentUserId(res));
     res.status(204).end();
   });
 

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { updateTeamSettingsRequestSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentUser } from '../http/locals';
+import { currentMembership, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { requireTeamRole } from '../teams/require-team-role';
 import { toTeamSettingsView } from './load-team-settings';
@@ -19,7 +19,7 @@ export function teamSettingsRoutes(em: EntityManager, requireUser: RequestHandle
 
   router.patch('/teams/:teamId/settings', requireUser, requireTeamRole(em, 'owner'), async (req, res) => {
     const request = parseBody(updateTeamSettingsRequestSchema, req.body);
-    res.json(await updateTeamSettings(em, { teamId: currentMembership(res).team.id, actorId: currentUser(res).id, request }));
+    res.json(await updateTeamSettings(em, { teamId: currentMembership(res).team.id, actorId: currentUserId(res), request }));
   });
 
   return router;

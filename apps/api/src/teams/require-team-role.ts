@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { hasRole, teamIdSchema, type Role } from '@tallus/contracts';
 import type { RequestHandler } from 'express';
 import { ForbiddenError, NotFoundError } from '../errors/app-errors';
-import { currentUser } from '../http/locals';
+import { currentUserId } from '../http/locals';
 import { parseIdParam } from '../http/validate';
 import { Membership } from './membership.entity';
 
@@ -20,7 +20,7 @@ import { Membership } from './membership.entity';
 export function requireTeamRole(em: EntityManager, required: Role): RequestHandler {
   return async (req, res, next) => {
     const teamId = parseIdParam(teamIdSchema, req.params['teamId'], 'TEAM_NOT_FOUND');
-    const membership = await em.findOne(Membership, { team: teamId, user: currentUser(res) }, { populate: ['team'] });
+    const membership = await em.findOne(Membership, { team: teamId, user: currentUserId(res) }, { populate: ['team'] });
     if (!membership) throw new NotFoundError('TEAM_NOT_FOUND', 'No such team, or you are not a member of it.');
     if (!hasRole(membership.role, required)) {
       throw new ForbiddenError('TEAM_ROLE_REQUIRED', `This needs the ${required} role in the team; you are ${membership.role}.`);

@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { createTeamRequestSchema, updateMemberRequestSchema, userSchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentUser } from '../http/locals';
+import { currentMembership, currentUser, currentUserId } from '../http/locals';
 import { parseBody, parseIdParam } from '../http/validate';
 import { changeMemberRole } from './change-member-role';
 import { createTeam } from './create-team';
@@ -47,12 +47,12 @@ export function teamRoutes({ em, requireUser }: TeamRoutesDependencies): Router 
     const userId = parseIdParam(userIdSchema, req.params['userId'], 'MEMBER_NOT_FOUND');
     const { role } = parseBody(updateMemberRequestSchema, req.body);
     const teamId = currentMembership(res).team.id;
-    res.json(await changeMemberRole(em, { teamId, actorId: currentUser(res).id, userId, role }));
+    res.json(await changeMemberRole(em, { teamId, actorId: currentUserId(res), userId, role }));
   });
 
   router.delete('/:teamId/members/:userId', requireTeamRole(em, 'owner'), async (req, res) => {
     const userId = parseIdParam(userIdSchema, req.params['userId'], 'MEMBER_NOT_FOUND');
-    await removeMember(em, { teamId: currentMembership(res).team.id, actorId: currentUser(res).id, userId });
+    await removeMember(em, { teamId: currentMembership(res).team.id, actorId: currentUserId(res), userId });
     res.status(204).end();
   });
 

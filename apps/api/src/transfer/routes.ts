@@ -3,7 +3,7 @@ import { exportQuerySchema, IMPORT_FILE_FIELD, IMPORT_MAX_BYTES } from '@tallus/
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import { BadRequestError } from '../errors/app-errors';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { getReactionSet } from '../reaction-sets/get-reaction-set';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
@@ -36,7 +36,7 @@ export function transferRoutes(em: EntityManager, requireUser: RequestHandler): 
         { code: 'IMPORT_NO_FILE', message: 'No file was uploaded.', path: [IMPORT_FILE_FIELD] },
       ]);
     }
-    res.status(201).json(await importSet(em, { teamId: currentMembership(res).team.id, actorId: currentUser(res).id, file: req.file.buffer }));
+    res.status(201).json(await importSet(em, { teamId: currentMembership(res).team.id, actorId: currentUserId(res), file: req.file.buffer }));
   });
 
   return router;

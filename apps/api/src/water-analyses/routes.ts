@@ -1,7 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { createWaterAnalysisRequestSchema, updateWaterAnalysisRequestSchema, waterAnalysisListQuerySchema } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { currentMembership, currentRecordId, currentUser } from '../http/locals';
+import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { SITE_RECORD_KINDS } from '../site-data/record-kinds';
 import { csvUpload, downloadName, uploadedCsv } from '../site-data/upload';
@@ -30,7 +30,7 @@ export function waterAnalysisRoutes(em: EntityManager, requireUser: RequestHandl
 
   router.post(base, requireUser, requireTeamRole(em, 'editor'), async (req, res) => {
     const request = parseBody(createWaterAnalysisRequestSchema, req.body);
-    res.status(201).json(await createWaterAnalysis(em, { teamId: teamId(res), actorId: currentUser(res).id, request }));
+    res.status(201).json(await createWaterAnalysis(em, { teamId: teamId(res), actorId: currentUserId(res), request }));
   });
 
   router.get(`${base}/export.csv`, requireUser, requireTeamRole(em, 'viewer'), async (_req, res) => {
@@ -47,7 +47,7 @@ export function waterAnalysisRoutes(em: EntityManager, requireUser: RequestHandl
   });
 
   router.post(`${base}/import`, requireUser, requireTeamRole(em, 'editor'), csvUpload(), async (req, res) => {
-    res.status(201).json(await importWaterCsv(em, { teamId: teamId(res), actorId: currentUser(res).id, ...uploadedCsv(req) }));
+    res.status(201).json(await importWaterCsv(em, { teamId: teamId(res), actorId: currentUserId(res), ...uploadedCsv(req) }));
   });
 
   router.get('/water-analyses/:id', requireUser, asRecord('viewer'), async (_req, res) => {
@@ -56,11 +56,11 @@ export function waterAnalysisRoutes(em: EntityManager, requireUser: RequestHandl
 
   router.patch('/water-analyses/:id', requireUser, asRecord('editor'), async (req, res) => {
     const request = parseBody(updateWaterAnalysisRequestSchema, req.body);
-    res.json(await updateWaterAnalysis(em, { id: currentRecordId(res), actorId: currentUser(res).id, request }));
+    res.json(await updateWaterAnalysis(em, { id: currentRecordId(res), actorId: currentUserId(res), request }));
   });
 
   router.delete('/water-analyses/:id', requireUser, asRecord('editor'), async (_req, res) => {
-    await deleteWaterAnalysis(em, currentRecordId(res), currentUser(res).id);
+    await deleteWaterAnalysis(em, currentRecordId(res), currentUserId(res));
     res.status(204).end();
   });
 
