@@ -163,4 +163,20 @@ describe('Review journey', () => {
     expect(changed.headers['etag']).not.toBe(etag);
     expect(changed.body.description).toBe('Changed');
   });
+
+  it('When a published set is renamed, then the library still lists and shows the name it was published under', async () => {
+    const setId = await createSet(testApp.app, editor, teamId, 'Name at publication');
+    await addReaction(testApp.app, editor, setId, { name: 'Forsterite', equation: PUBLISHED.forsterite, kind: 'dissolution' });
+    await post(editor, `/api/reaction-sets/${setId}/submit`).expect(200);
+    await post(reviewer, `/api/reaction-sets/${setId}/approve`).expect(200);
+    const publication = (await post(owner, `/api/reaction-sets/${setId}/publish`).expect(201)).body;
+    expect(publication.setName).toBe('Name at publication');
+
+    const live = (await get(editor, `/api/reaction-sets/${setId}`).expect(200)).body;
+    await request(testApp.app).patch(`/api/reaction-sets/${setId}`).set('Authorization', editor.auth).send({ name: 'Renamed later', version: live.version }).expect(200);
+
+    const library = (await get(owner, '/api/library').expect(200)).body;
+    expect(library).toContainEqual(expect.objectContaining({ id: publication.id, setId, setName: 'Name at publication' }));
+    expect((await get(owner, `/api/library/${publication.id}`).expect(200)).body.setName).toBe('Name at publication');
+  });
 });

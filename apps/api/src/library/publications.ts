@@ -11,23 +11,40 @@ import { toActor } from '../users/to-actor';
 import { User } from '../users/user.entity';
 import { Publication } from './publication.entity';
 
-const POPULATE = ['team', 'publishedBy', 'revision', 'revision.set'] as const;
+const POPULATE = ['team', 'publishedBy', 'revision'] as const;
 
-function toPublicationView(publication: Publication): PublicationView {
+/**
+ * A publication as responses show it, under `setName`: the name frozen with the revision,
+ * so later renames of the live set do not change what was published.
+ */
+function toPublicationView(publication: Publication, setName: string): PublicationView {
   const revision = publication.revision.getEntity();
-  const snapshot = revision.snapshot as RevisionSnapshot | undefined;
   return {
     id: publication.id,
     teamId: publication.team.id,
     teamName: publication.team.getEntity().name,
     setId: revision.set.id,
-    // The name frozen with the revision: later renames of the live set do not change what was published.
-    setName: snapshot?.set.name ?? revision.set.getEntity().name,
+    setName,
     revision: revision.number,
     reactionCount: revision.reactionCount,
     publishedBy: toActor(publication.publishedBy),
     publishedAt: publication.createdAt.toISOString(),
   };
+}
+
+/**
+ * Publications with the set names frozen in their revisions' snapshots, read in one query
+ * from the JSON column without loading the (lazy, large) snapshots themselves.
+ */
+async function toPublicationViews(em: EntityManager, publications: Publication[]): Promise<PublicationView[]> {
+  if (publications.length === 0) return [];
+  const revisionIds = publications.map((publication) => publication.revision.id);
+  const rows = await em.execute<Array<{ id: string; set_name: string }>>(
+    `select id, snapshot->'set'->>'name' as set_name from revisions where id in (${revisionIds.map(() => '?').join(', ')})`,
+    revisionIds,
+  );
+  const nameOf = new Map(rows.map((row) => [row.id, row.set_name]));
+  return publications.map((publication) => toPublicationView(publication, nameOf.get(publication.revision.id)!));
 }
 
 /**
@@ -48,13 +65,14 @@ export async function publishSet(em: EntityManager, setId: string, actorId: stri
     await tx.flush();
     return publication.id;
   });
-  return toPublicationView(await em.findOneOrFail(Publication, id, { populate: [...POPULATE], refresh: true }));
+  const [view] = await toPublicationViews(em, [await em.findOneOrFail(Publication, id, { populate: [...POPULATE], refresh: true })]);
+  return view!;
 }
 
 /** Every publication of every team, newest first (any signed-in user). */
 export async function listLibrary(em: EntityManager): Promise<LibraryResponse> {
   const publications = await em.find(Publication, {}, { orderBy: { createdAt: 'desc', id: 'asc' }, populate: [...POPULATE] });
-  return publications.map(toPublicationView);
+  return toPublicationViews(em, publications);
 }
 
 /**
@@ -65,5 +83,6 @@ export async function listLibrary(em: EntityManager): Promise<LibraryResponse> {
 export async function getPublication(em: EntityManager, publicationId: string): Promise<PublicationDetail> {
   const publication = await em.findOne(Publication, publicationId, { populate: [...POPULATE, 'revision.snapshot', 'revision.vettedBy'] });
   if (!publication) throw new NotFoundError('PUBLICATION_NOT_FOUND', 'No such publication in the library.');
-  return { ...toPublicationView(publication), snapshot: toRevisionView(publication.revision.getEntity()) };
+  const revision = publication.revision.getEntity();
+  return { ...toPublicationView(publication, (revision.snapshot as RevisionSnapshot).set.name), snapshot: toRevisionView(revision) };
 }
