@@ -92,6 +92,16 @@ describe('rock samples: acid-base accounting (Sobek et al. 1978) and CO2 uptake'
     expect(refused.body.code).toBe('IMPORT_INVALID');
     expect((await list()).length).toBe(before);
   });
+
+  it('When a rock CSV has no sample column, then even with skipInvalid the import answers 400 CSV_MISSING_VALUE on the header and saves nothing', async () => {
+    const before = (await list()).length;
+
+    const refused = await uploadCsv(app(), editor, `/api/teams/${teamId}/rock-samples/import`, ['site,total_s_pct', 'Pit,1.0', 'Pit,0.5'].join('\n'), { skipInvalid: 'true' }).expect(400);
+
+    expect(refused.body.code).toBe('IMPORT_INVALID');
+    expect(refused.body.issues).toContainEqual(expect.objectContaining({ code: 'CSV_MISSING_VALUE', path: [1] }));
+    expect((await list()).length).toBe(before);
+  });
 });
 
 describe('mineral formulas from oxide analyses', () => {

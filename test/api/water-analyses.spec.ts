@@ -2,7 +2,7 @@ import { chargeBalance, findSolute, toMilliequivalentsPerLitre, toMillimolesPerL
 import type { WaterAnalysis } from '@tallus/contracts';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CHIM_LU_MMOL, mmolWater, saveWater } from './support/site-data';
+import { CHIM_LU_MMOL, mmolWater, saveWater, uploadCsv } from './support/site-data';
 import { addMember, createTeam, registerUser, startTestApp, type SignedInUser, type TestApp } from './support/test-app';
 
 let testApp: TestApp;
@@ -98,5 +98,18 @@ describe('water analyses: conversions and charge balance', () => {
     await saveWater(app(), editor, teamId, mmolWater('Twin', { Na: '1' }));
     const clash = await request(app()).post(`/api/teams/${teamId}/water-analyses`).set('Authorization', editor.auth).send(mmolWater('Twin', { Na: '2' })).expect(409);
     expect(clash.body.code).toBe('WATER_ANALYSIS_DUPLICATE');
+  });
+});
+
+describe('water analyses: CSV header problems', () => {
+  it('When a CSV has no sample column, then even with skipInvalid the import answers 400 CSV_MISSING_VALUE on the header and saves nothing', async () => {
+    const count = async () => (await request(app()).get(`/api/teams/${teamId}/water-analyses`).set('Authorization', editor.auth).expect(200)).body.length;
+    const before = await count();
+
+    const refused = await uploadCsv(app(), editor, `/api/teams/${teamId}/water-analyses/import`, ['site,ph', 'Pit,7.1', 'Pit,6.9'].join('\n'), { skipInvalid: 'true' }).expect(400);
+
+    expect(refused.body.code).toBe('IMPORT_INVALID');
+    expect(refused.body.issues).toContainEqual(expect.objectContaining({ code: 'CSV_MISSING_VALUE', path: [1] }));
+    expect(await count()).toBe(before);
   });
 });

@@ -56,11 +56,13 @@ export function unreadablePreview<Request>(issues: CsvIssue[]): CsvPreview<Reque
 /**
  * The requests to save on confirm: every row when all are valid; only the
  * valid rows with `skipInvalid`; otherwise nothing, and 400 with every issue.
+ * A file or header issue (line 0 or 1) or a parse error always refuses the file.
  *
  * @throws BadRequestError IMPORT_INVALID with issues at `[line, column]`
  */
 export function rowsToImport<Request>(preview: CsvPreview<Request>, skipInvalid: boolean): { requests: Request[]; skippedLines: number[] } {
-  const hasFileIssues = preview.issues.some((issue) => issue.line === 0 || issue.code === 'CSV_PARSE' || issue.code === 'CSV_UNKNOWN_COLUMN' || issue.code === 'CSV_UNKNOWN_SOLUTE' || issue.code === 'CSV_BAD_UNIT' || issue.code === 'CSV_DUPLICATE_COLUMN');
+  // Line 0 is the whole file and line 1 its header: a row left out cannot mend either, whatever the code.
+  const hasFileIssues = preview.issues.some((issue) => issue.line <= 1 || issue.code === 'CSV_PARSE');
   const noRows = preview.rows.length === 0;
   if (hasFileIssues || noRows || (preview.invalidCount > 0 && !skipInvalid)) {
     const issues = noRows && preview.issues.length === 0 ? [{ code: 'CSV_PARSE', message: 'The file has no data rows.', line: 0, column: null }] : preview.issues;
