@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { ref } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
+import type { OxidationStateMap } from '@tallus/chem';
 import type { CreateReactionRequest, ReactionWriteResponse, UpdateReactionRequest } from '@tallus/contracts';
 import { recordAudit } from '../audit/record-audit';
 import { assertVersion } from '../db/assert-version';
@@ -38,7 +39,8 @@ export async function createReaction(em: EntityManager, input: CreateReactionInp
     }
     const { request } = input;
     const reference = request.reference || null;
-    const result = computeReactionResult({ equation: request.equation, reference, oxidationStates: await loadOxidationStates(tx, set.team.id) });
+    const oxidationStates = await loadOxidationStates(tx, set.team.id);
+    const result = computeReactionResult({ equation: request.equation, reference, oxidationStates });
     const reaction = tx.create(Reaction, {
       id: randomUUID(),
       set: ref(set),
@@ -52,7 +54,7 @@ export async function createReaction(em: EntityManager, input: CreateReactionInp
       ...toResultColumns(result),
     });
     recordAudit(tx, { teamId: set.team.id, actorId: input.actorId, action: 'reaction.created', entityType: 'reaction', entityId: reaction.id, summary: `Added reaction "${reaction.name}" to "${set.name}"` });
-    return finishReactionWrite(tx, set, reaction);
+    return finishReactionWrite(tx, set, oxidationStates, reaction);
   });
 }
 
@@ -77,14 +79,11 @@ export async function updateReaction(em: EntityManager, input: UpdateReactionInp
     const { version: _version, reference, ...fields } = input.request;
     Object.assign(reaction, Object.fromEntries(Object.entries(fields).filter(([, value]) => value !== undefined)));
     if (reference !== undefined) reaction.reference = reference || null;
-    const result = computeReactionResult({
-      equation: reaction.equation,
-      reference: reaction.reference ?? null,
-      oxidationStates: await loadOxidationStates(tx, set.team.id),
-    });
+    const oxidationStates = await loadOxidationStates(tx, set.team.id);
+    const result = computeReactionResult({ equation: reaction.equation, reference: reaction.reference ?? null, oxidationStates });
     Object.assign(reaction, toResultColumns(result));
     recordAudit(tx, { teamId: set.team.id, actorId: input.actorId, action: 'reaction.updated', entityType: 'reaction', entityId: reaction.id, summary: `Changed reaction "${reaction.name}" in "${set.name}"` });
-    return finishReactionWrite(tx, set, reaction);
+    return finishReactionWrite(tx, set, oxidationStates, reaction);
   });
 }
 
@@ -102,14 +101,18 @@ export async function deleteReaction(em: EntityManager, reactionId: string, acto
     tx.remove(reaction);
     await tx.flush();
     await tx.execute('update reactions set position = position - 1 where set_id = ? and position > ?', [set.id, reaction.position]);
-    return finishReactionWrite(tx, set);
+    return finishReactionWrite(tx, set, await loadOxidationStates(tx, set.team.id));
   });
 }
 
-/** Flushes the reaction, recomputes the set's net reactions, flushes again, and builds the answer. */
-async function finishReactionWrite(tx: EntityManager, set: ReactionSet, reaction?: Reaction): Promise<ReactionWriteResponse> {
+/**
+ * Flushes the reaction, recomputes the set's net reactions, flushes again, and builds the answer.
+ *
+ * @param oxidationStates the team's states, as the write loaded them in this transaction
+ */
+async function finishReactionWrite(tx: EntityManager, set: ReactionSet, oxidationStates: OxidationStateMap, reaction?: Reaction): Promise<ReactionWriteResponse> {
   await tx.flush();
-  const nets = await recomputeNetReactions(tx, set.id, await loadOxidationStates(tx, set.team.id));
+  const nets = await recomputeNetReactions(tx, set.id, oxidationStates);
   await tx.flush();
   await tx.populate(set, ['updatedBy', 'submittedBy']);
   return { ...(reaction ? { reaction: toReactionView(reaction) } : {}), set: toSetHeader(set), netReactions: nets.map(toNetReactionView) };
