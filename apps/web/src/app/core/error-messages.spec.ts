@@ -1,6 +1,8 @@
+import { HttpErrorResponse } from '@angular/common/http';
 import type { Problem } from '@tallus/contracts';
 
 import { describeProblem, describeValidationErrors } from './error-messages';
+import { toProblem } from './problem';
 
 const problem = (code: Problem['code'], detail: string): Problem => ({
   type: 'about:blank',
@@ -17,6 +19,24 @@ describe('describeProblem', () => {
 
   it('falls back to the API detail for other codes', () => {
     expect(describeProblem(problem('CONFLICT', 'The row changed meanwhile.'))).toBe('The row changed meanwhile.');
+  });
+
+  it('shows the specific detail of an UNKNOWN problem, e.g. that the server failed', () => {
+    const failed = toProblem(new HttpErrorResponse({ status: 502, error: '<html>Bad gateway</html>' }));
+
+    expect(describeProblem(failed)).toContain('The server failed to answer');
+  });
+
+  it('shows a detail set for an UNKNOWN problem after toProblem, e.g. by the global error handler', () => {
+    const updated = { ...toProblem(new Error('Failed to fetch dynamically imported module')), detail: 'Tallus was updated.' };
+
+    expect(describeProblem(updated)).toBe('Tallus was updated.');
+  });
+
+  it('tells that the server could not be reached when there was no answer', () => {
+    const offline = toProblem(new HttpErrorResponse({ status: 0, error: new ProgressEvent('error') }));
+
+    expect(describeProblem(offline)).toContain('could not reach its server');
   });
 });
 

@@ -4,10 +4,10 @@ import type { Problem, ProblemIssue } from '@tallus/contracts';
 /**
  * Screen texts for error codes, in one place. Problems from the API bring their own
  * English `detail`; these texts replace it where the screen can say more about what to do.
+ * NETWORK and UNKNOWN have no entry: `toProblem` and the global error handler give those
+ * problems a detail that says more than one fixed text could (a failed lazy chunk, a 5xx).
  */
 const messagesByCode: Readonly<Record<string, string>> = {
-  NETWORK: 'Tallus could not reach its server. Check your connection and try again.',
-  UNKNOWN: 'Something unexpected went wrong. Try again in a moment.',
   AUTH_INVALID_CREDENTIALS: 'E-mail or password is wrong.',
   AUTH_RATE_LIMITED: 'Too many attempts. Wait a few minutes, then try again.',
   AUTH_EMAIL_TAKEN: 'An account with this e-mail exists already. Sign in instead.',
