@@ -36,15 +36,11 @@ export function findTermIndex(equation: Equation, formulaText: string): number {
  * @throws ChemError BALANCE_BAD_PIN for a negative or unreadable value.
  */
 export function readPinValue(value: Rational | number | string): Rational {
-  const text = String(value);
-  let parsed: Rational | null = null;
-  if (value instanceof Rational) parsed = value;
-  else if (typeof value === 'number') parsed = Number.isFinite(value) ? Rational.tryParse(String(value)) : null;
-  else parsed = Rational.tryParse(value);
+  const parsed = Rational.tryFrom(value);
   if (parsed === null || parsed.sign() < 0) {
     throw new ChemError('BALANCE_BAD_PIN', `A pinned coefficient must be a number ≥ 0, such as 2, 0.5 or 15/4.`, {
       start: 0,
-      end: text.length,
+      end: String(value).length,
     });
   }
   return parsed;

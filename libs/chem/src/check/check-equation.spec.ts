@@ -39,6 +39,17 @@ describe('checkEquation', () => {
     expect(result.electrons?.byElement.get('Fe')?.toString()).toBe('4');
   });
 
+  it.each([['abc'], ['1e-7'], [1e-7]])('warns OXIDATION_BAD_STATE, not a plain Error, for the explicit state %j', (state) => {
+    const equation = 'FeS2 + 7/2 O2 + H2O -> Fe^2+ + 2 SO4^2- + 2 H+';
+    const result = checkEquation(equation, { oxidationStates: { FeS2: { Fe: state } } });
+    expect([result.status, result.electrons, result.warnings[0].code, result.warnings[0].span]).toEqual([
+      'balanced',
+      null,
+      'OXIDATION_BAD_STATE',
+      { start: 0, end: String(state).length },
+    ]);
+  });
+
   it('warns when an oxidation state cannot be decided, and still checks the balance', () => {
     const result = checkEquation('MnFe2O4 + 8 H+ -> Mn^2+ + 2 Fe^3+ + 4 H2O');
     expect([result.status, result.electrons, result.warnings[0].code, result.warnings[0].span]).toEqual([

@@ -62,8 +62,9 @@ function tryElectrons(equation: Equation, options: CheckOptions, warnings: ChemW
 
 /**
  * Checks a reaction as written. Never throws for bad text: the result then has status
- * `invalid` and an `error`. Errors in options (an unknown reference, a bad oxidation-state key)
- * also give `invalid`, with the span in the option's text.
+ * `invalid` and an `error`. An unknown reference also gives `invalid`, with the span in the
+ * option's text. A bad oxidation-state entry (a key that does not parse, a state that is not a
+ * number) gives `electrons: null` and a warning, with the span in the entry's text.
  *
  * @example
  * const result = checkEquation('FeS2 + 7/2 O2 + H2O -> Fe^2+ + 2 SO4^2- + 2 H+');

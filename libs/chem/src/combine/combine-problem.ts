@@ -50,7 +50,7 @@ function keyFunction(equations: readonly Equation[]): (formula: Formula) => stri
 }
 
 function readMultiplier(value: Rational | number | string, reaction: number): Rational {
-  const parsed = value instanceof Rational ? value : Rational.tryParse(String(value));
+  const parsed = Rational.tryFrom(value);
   if (parsed !== null) return parsed;
   throw new ChemError('COMBINE_BAD_MULTIPLIER', 'A multiplier is a number such as 2, -1, 0.5 or 15/4.', { start: 0, end: String(value).length }, { reaction });
 }

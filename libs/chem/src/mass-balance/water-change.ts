@@ -26,12 +26,7 @@ function badValue(text: string, field: string): ChemError {
 function readAmount(value: number | string, field: string): { amount: Rational; below: boolean } {
   const text = String(value).trim();
   const below = text.startsWith('<');
-  let amount: Rational | null = null;
-  try {
-    amount = typeof value === 'number' ? Rational.fromNumber(value) : Rational.tryParse(below ? text.slice(1) : text);
-  } catch {
-    amount = null; // a number in exponent notation or not finite: refused below
-  }
+  const amount = Rational.tryFrom(typeof value === 'number' ? value : below ? text.slice(1) : text);
   if (amount === null || amount.sign() < 0) throw badValue(text, field);
   return { amount: below ? Rational.ZERO : amount, below };
 }

@@ -2,7 +2,7 @@
  * Electron budget of a reaction: electrons given up (+) or taken (−) by each element whose
  * oxidation state changes, the total transferred, and the O2 the reaction uses.
  */
-import type { Span } from '../errors/chem-error';
+import { ChemError, type Span } from '../errors/chem-error';
 import type { Side } from '../equation/equation';
 import type { Formula } from '../formula/formula';
 import { parseFormula } from '../formula/parse-formula';
@@ -35,18 +35,27 @@ export interface ElectronBudget {
   readonly o2Demand: Rational;
 }
 
-function toRational(value: Rational | number | string): Rational {
-  return value instanceof Rational ? value : Rational.parse(String(value));
+function readState(formulaText: string, symbol: string, value: Rational | number | string): Rational {
+  const state = Rational.tryFrom(value);
+  if (state !== null) return state;
+  const text = String(value);
+  throw new ChemError(
+    'OXIDATION_BAD_STATE',
+    `"${text}" is not an oxidation state of ${symbol} in ${formulaText}; give a number such as 2, -1 or 8/3.`,
+    { start: 0, end: text.length },
+    { species: formulaText, element: symbol },
+  );
 }
 
 /**
  * Turns an {@link OxidationStateMap} into a lookup by species, falling back to built-in states.
- * @throws ChemError FORMULA_* codes for a key that does not parse (span in the key).
+ * @throws ChemError FORMULA_* codes for a key that does not parse (span in the key);
+ *   OXIDATION_BAD_STATE for a state that is not a number (span in the value's text).
  */
 export function oxidationStateLookup(map: OxidationStateMap = {}): (formula: Formula) => OxidationStates | undefined {
   const table = new Map<string, OxidationStates>();
   for (const [formulaText, states] of Object.entries(map)) {
-    const entries = Object.entries(states).map(([symbol, value]): [string, Rational] => [symbol, toRational(value)]);
+    const entries = Object.entries(states).map(([symbol, value]): [string, Rational] => [symbol, readState(formulaText, symbol, value)]);
     table.set(speciesKey(parseFormula(formulaText)), new Map(entries));
   }
   return (formula) => table.get(speciesKey(formula)) ?? BUILT_IN_STATES.get(speciesKey(formula));

@@ -22,6 +22,20 @@ describe('Rational', () => {
   });
 
   it.each([
+    [Rational.of(15, 4), '15/4'],
+    [0.35, '7/20'],
+    [-3, '-3'],
+    [' 15/4 ', '15/4'],
+    ['abc', null],
+    ['1e-7', null],
+    [1e-7, null],
+    [Number.NaN, null],
+    [Number.POSITIVE_INFINITY, null],
+  ])('reads the caller value %j with tryFrom as %s, or null', (value, expected) => {
+    expect(Rational.tryFrom(value)?.toString() ?? null).toBe(expected);
+  });
+
+  it.each([
     ['7/20', '0.35'],
     ['69/50', '1.38'],
     ['-1/8', '-0.125'],

@@ -85,13 +85,29 @@ export class Rational {
     return value;
   }
 
-  /** Converts a safe integer or a finite decimal number (via its shortest decimal text). */
+  /**
+   * Converts an integer or a finite decimal number (via its shortest decimal text).
+   * @throws Error for a number that is not finite or only has an exponent form (`1e-7`).
+   */
   static fromNumber(value: number): Rational {
-    if (!Number.isFinite(value)) throw new Error(`Not a finite number: ${value}`);
+    const read = Rational.tryFrom(value);
+    if (read === null) throw new Error(`Not a finite number with an exact decimal form: ${value}`);
+    return read;
+  }
+
+  /**
+   * Reads a value as a caller gives it: a Rational as is, an integer or a finite decimal number
+   * exactly (via its shortest decimal text), text as {@link Rational.tryParse} reads it. Returns
+   * `null` otherwise (`"abc"`, `NaN`, `1e-7`), so that each caller raises its own error.
+   * @example Rational.tryFrom(0.35)?.toString(); // "7/20"
+   */
+  static tryFrom(value: Rational | number | string): Rational | null {
+    if (value instanceof Rational) return value;
+    if (typeof value !== 'number') return Rational.tryParse(String(value));
+    if (!Number.isFinite(value)) return null;
     if (Number.isInteger(value)) return Rational.of(BigInt(value));
     const text = value.toString();
-    if (text.includes('e')) throw new Error(`Number out of range for exact reading: ${value}`);
-    return Rational.parse(text);
+    return text.includes('e') ? null : Rational.tryParse(text);
   }
 
   add(other: Rational): Rational {
