@@ -47,18 +47,39 @@ function readState(formulaText: string, symbol: string, value: Rational | number
   );
 }
 
-/**
- * Turns an {@link OxidationStateMap} into a lookup by species, falling back to built-in states.
- * @throws ChemError FORMULA_* codes for a key that does not parse (span in the key);
- *   OXIDATION_BAD_STATE for a state that is not a number (span in the value's text).
- */
-export function oxidationStateLookup(map: OxidationStateMap = {}): (formula: Formula) => OxidationStates | undefined {
+/** A lookup of explicit oxidation states by species. */
+type StateLookup = (formula: Formula) => OxidationStates | undefined;
+
+const NO_STATES: OxidationStateMap = {};
+
+/** Built lookups by map object: a team's map is built once, not on every check (every keystroke). */
+const lookups = new WeakMap<OxidationStateMap, StateLookup>();
+
+function buildLookup(map: OxidationStateMap): StateLookup {
   const table = new Map<string, OxidationStates>();
   for (const [formulaText, states] of Object.entries(map)) {
     const entries = Object.entries(states).map(([symbol, value]): [string, Rational] => [symbol, readState(formulaText, symbol, value)]);
     table.set(speciesKey(parseFormula(formulaText)), new Map(entries));
   }
-  return (formula) => table.get(speciesKey(formula)) ?? BUILT_IN_STATES.get(speciesKey(formula));
+  return (formula) => {
+    const key = speciesKey(formula);
+    return table.get(key) ?? BUILT_IN_STATES.get(key);
+  };
+}
+
+/**
+ * Turns an {@link OxidationStateMap} into a lookup by species, falling back to built-in states.
+ * The lookup is kept per map object, so a map must not be changed once it has been used.
+ * @throws ChemError FORMULA_* codes for a key that does not parse (span in the key);
+ *   OXIDATION_BAD_STATE for a state that is not a number (span in the value's text).
+ */
+export function oxidationStateLookup(map: OxidationStateMap = NO_STATES): StateLookup {
+  let lookup = lookups.get(map);
+  if (lookup === undefined) {
+    lookup = buildLookup(map);
+    lookups.set(map, lookup);
+  }
+  return lookup;
 }
 
 function isOxygenGas(formula: Formula): boolean {

@@ -63,3 +63,14 @@ describe('assignOxidationStates', () => {
     }
   });
 });
+
+describe('oxidationStateLookup', () => {
+  it('builds the lookup of one map object once, and reads a different formula of the same species', () => {
+    const map = { Fe3O4: { Fe: '8/3', O: -2 } };
+    const lookup = oxidationStateLookup(map);
+    expect(oxidationStateLookup(map)).toBe(lookup);
+    expect(oxidationStateLookup({ ...map })).not.toBe(lookup);
+    expect(lookup(parseFormula('O4Fe3'))?.get('Fe')?.toString()).toBe('8/3');
+    expect(lookup(parseFormula('FeS2'))?.get('S')?.toString()).toBe('-1');
+  });
+});
