@@ -1,11 +1,10 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { ReactionSetDetail, StatusCounts } from '@tallus/contracts';
-import { Publication } from '../library/publication.entity';
 import { NetReaction } from '../net-reactions/net-reaction.entity';
 import { toNetReactionView } from '../net-reactions/to-net-reaction-view';
 import { readReactionViews } from '../reactions/read-reaction-views';
+import { listRevisions } from '../review/get-revisions';
 import { ReviewComment } from '../review/review-comment.entity';
-import { Revision } from '../review/revision.entity';
 import { toActor } from '../users/to-actor';
 import { ReactionSet } from './reaction-set.entity';
 import { emptyStatusCounts, toSetSummary } from './to-set-view';
@@ -25,10 +24,8 @@ export async function getReactionSet(em: EntityManager, setId: string): Promise<
     () => readReactionViews(em, setId),
     () => em.find(NetReaction, { set: setId }, { orderBy: { position: 'asc', createdAt: 'asc' }, refresh: true }),
     () => em.find(ReviewComment, { set: setId }, { orderBy: { createdAt: 'asc', id: 'asc' }, populate: ['author'] }),
-    () => em.find(Revision, { set: setId }, { orderBy: { number: 'desc' }, populate: ['vettedBy'] }),
+    () => listRevisions(em, setId),
   ]);
-  const publications = revisions.length === 0 ? [] : await em.find(Publication, { revision: { $in: revisions.map((revision) => revision.id) } });
-  const publicationOf = new Map(publications.map((publication) => [publication.revision.id, publication.id]));
   const counts: StatusCounts = emptyStatusCounts();
   for (const reaction of reactions) counts[reaction.result.status]++;
   return {
@@ -43,13 +40,7 @@ export async function getReactionSet(em: EntityManager, setId: string): Promise<
       revision: comment.revision ?? null,
       createdAt: comment.createdAt.toISOString(),
     })),
-    revisions: revisions.map((revision) => ({
-      number: revision.number,
-      vettedBy: toActor(revision.vettedBy),
-      vettedAt: revision.vettedAt.toISOString(),
-      reactionCount: revision.reactionCount,
-      publicationId: publicationOf.get(revision.id) ?? null,
-    })),
+    revisions,
   };
 }
 
