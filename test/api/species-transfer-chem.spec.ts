@@ -85,6 +85,19 @@ describe('Import and export', () => {
     expect(csv.split('\r\n')[1]).toContain(',balanced,');
   });
 
+  it('When a reaction name or note starts like a spreadsheet formula, then the CSV export prefixes it with a quote, as the site CSVs do', async () => {
+    const setId = await createSet(testApp.app, owner, teamId, 'Formula cells');
+    await send('post', `/api/reaction-sets/${setId}/reactions`, { name: '=HYPERLINK("http://attacker.test","open")', kind: 'dissolution', equation: PUBLISHED.calcite, notes: '@SUM(1+1)' }).expect(201);
+
+    const response = await send('get', `/api/reaction-sets/${setId}/export?format=csv`).expect(200);
+    const row = response.text.split('\r\n')[1]!;
+
+    expect(row).toContain(`,"'=HYPERLINK(""http://attacker.test"",""open"")",`);
+    expect(row.endsWith(",'@SUM(1+1)")).toBe(true);
+    expect(row).not.toMatch(/,"?[=@]/);
+    expect(response.headers['content-disposition']).toContain('Formula-cells.csv');
+  });
+
   it('When a malformed file is imported, then the answer is 400 IMPORT_INVALID with every problem and its path, and nothing is saved', async () => {
     const tables = ['reaction_sets', 'reactions', 'net_reactions', 'species', 'audit_events'];
     const before = await Promise.all(tables.map(countRows));

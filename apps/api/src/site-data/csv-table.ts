@@ -49,15 +49,17 @@ export function isCsvIssue(value: unknown): value is CsvIssue {
 }
 
 /**
- * Writes rows as CSV (RFC 4180 quoting by papaparse), with a header line.
+ * Writes rows as CSV (RFC 4180 quoting by papaparse), with a header line, each
+ * line ended by `newline` (`\n` unless told).
  * Cells that start with `=`, `+`, `-` or `@` and are not numbers are prefixed with `'`,
  * so a spreadsheet does not run them as formulas.
  */
-export function writeCsv(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string | number | boolean | null>>): string {
+export function writeCsv(header: readonly string[], rows: ReadonlyArray<ReadonlyArray<string | number | boolean | null>>, options: { newline?: '\n' | '\r\n' } = {}): string {
+  const newline = options.newline ?? '\n';
   const safe = (cell: string | number | boolean | null): string => {
     if (cell === null) return '';
     const text = String(cell);
     return /^[=+\-@]/.test(text) && !Number.isFinite(Number(text)) ? `'${text}` : text;
   };
-  return `${Papa.unparse({ fields: [...header], data: rows.map((row) => row.map(safe)) }, { newline: '\n' })}\n`;
+  return `${Papa.unparse({ fields: [...header], data: rows.map((row) => row.map(safe)) }, { newline })}${newline}`;
 }

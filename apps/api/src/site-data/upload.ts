@@ -23,8 +23,12 @@ export function uploadedCsv(req: Request): { file: Buffer; skipInvalid: boolean 
   return { file: req.file.buffer, skipInvalid: body[CSV_SKIP_INVALID_FIELD] === 'true' };
 }
 
-/** A safe file name for a download: letters, digits, dashes. */
-export function downloadName(base: string, extension: string): string {
-  const slug = base.normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'tallus';
+/**
+ * A safe file name for a download: letters, digits, dashes.
+ *
+ * @param fallback the name when `base` has no safe character left
+ */
+export function downloadName(base: string, extension: string, fallback = 'tallus'): string {
+  const slug = base.normalize('NFKD').replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || fallback;
   return `${slug}.${extension}`;
 }

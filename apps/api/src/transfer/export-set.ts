@@ -1,8 +1,8 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { EXPORT_CSV_COLUMNS, REACTION_SET_FILE_FORMAT, REACTION_SET_FILE_VERSION, type ReactionSetDetail, type ReactionSetFile } from '@tallus/contracts';
-import Papa from 'papaparse';
 import { getReactionSet } from '../reaction-sets/get-reaction-set';
 import { buildSnapshot } from '../review/build-snapshot';
+import { writeCsv } from '../site-data/csv-table';
 
 /**
  * A set as a Tallus reaction-set file (format version 1): its fields, reactions,
@@ -30,7 +30,11 @@ export async function exportSetJson(em: EntityManager, setId: string): Promise<R
   };
 }
 
-/** One CSV row per reaction, with its stored results (columns: {@link EXPORT_CSV_COLUMNS}). */
+/**
+ * One CSV row per reaction, with its stored results (columns: {@link EXPORT_CSV_COLUMNS}),
+ * CRLF line ends; names and notes are user text, so cells a spreadsheet would run
+ * as formulas are guarded as in every CSV export.
+ */
 export function toCsv(detail: ReactionSetDetail): string {
   const rows = detail.reactions.map((reaction) => {
     const { result } = reaction;
@@ -52,11 +56,5 @@ export function toCsv(detail: ReactionSetDetail): string {
     };
     return EXPORT_CSV_COLUMNS.map((column) => values[column]);
   });
-  return Papa.unparse({ fields: [...EXPORT_CSV_COLUMNS], data: rows }, { newline: '\r\n' });
-}
-
-/** A file name for the set's export: its name in safe characters. */
-export function exportFileName(name: string, extension: 'json' | 'csv'): string {
-  const base = name.normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'reaction-set';
-  return `${base}.${extension}`;
+  return writeCsv(EXPORT_CSV_COLUMNS, rows, { newline: '\r\n' });
 }

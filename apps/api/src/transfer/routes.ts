@@ -6,9 +6,10 @@ import { BadRequestError } from '../errors/app-errors';
 import { currentMembership, currentRecordId, currentUserId } from '../http/locals';
 import { parseBody } from '../http/validate';
 import { getReactionSet } from '../reaction-sets/get-reaction-set';
+import { downloadName } from '../site-data/upload';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
-import { exportFileName, exportSetJson, toCsv } from './export-set';
+import { exportSetJson, toCsv } from './export-set';
 import { importSet } from './import-set';
 
 /**
@@ -23,11 +24,11 @@ export function transferRoutes(em: EntityManager, requireUser: RequestHandler): 
     const { format } = parseBody(exportQuerySchema, req.query);
     if (format === 'csv') {
       const detail = await getReactionSet(em, currentRecordId(res));
-      res.attachment(exportFileName(detail.name, 'csv')).type('text/csv; charset=utf-8').send(toCsv(detail));
+      res.attachment(downloadName(detail.name, 'csv', 'reaction-set')).type('text/csv; charset=utf-8').send(toCsv(detail));
       return;
     }
     const file = await exportSetJson(em, currentRecordId(res));
-    res.attachment(exportFileName(file.set.name, 'json')).json(file);
+    res.attachment(downloadName(file.set.name, 'json', 'reaction-set')).json(file);
   });
 
   router.post('/teams/:teamId/reaction-sets/import', requireUser, requireTeamRole(em, 'editor'), upload.single(IMPORT_FILE_FIELD), async (req, res) => {
