@@ -27,16 +27,19 @@ export interface PhaseInput {
 /** A constraint: an element symbol, `charge` or `electrons`. */
 export type Constraint = string;
 
-const NEUTRAL_SOLUTES = ['H4SiO4', 'H2CO3', 'H2S', 'H3BO3', 'NH3'];
-const SOLVENT = ['H+', 'OH-', 'H3O+', 'H2O'];
+function speciesKeys(texts: readonly string[]): ReadonlySet<string> {
+  return new Set(texts.map((text) => speciesKey(parseFormula(text))));
+}
+
+const NEUTRAL_SOLUTES = speciesKeys(['H4SiO4', 'H2CO3', 'H2S', 'H3BO3', 'NH3']);
+const SOLVENT = speciesKeys(['H+', 'OH-', 'H3O+', 'H2O']);
 
 /**
  * Whether a species is the solvent or its ions (H2O, H+, OH-, H3O+), which no analysis lists.
  * @example isSolvent(parseFormula('H+')); // true
  */
 export function isSolvent(formula: Formula): boolean {
-  const key = speciesKey(formula);
-  return SOLVENT.some((text) => speciesKey(parseFormula(text)) === key);
+  return SOLVENT.has(speciesKey(formula));
 }
 
 /**
@@ -45,10 +48,11 @@ export function isSolvent(formula: Formula): boolean {
  * @example isDissolved(parseFormula('Na+')); // true
  */
 export function isDissolved(formula: Formula): boolean {
+  if (formula.isElectron) return false;
   const key = speciesKey(formula);
-  if (formula.isElectron || isSolvent(formula)) return false;
+  if (SOLVENT.has(key)) return false;
   if (!formula.charge.isZero() || formula.phase === 'aq') return true;
-  return NEUTRAL_SOLUTES.some((text) => speciesKey(parseFormula(text)) === key);
+  return NEUTRAL_SOLUTES.has(key);
 }
 
 /** The exchange site `X` (not an element) is read as the placeholder element Xe, absent from waters. */
@@ -87,8 +91,9 @@ function equationColumn(phase: PhaseInput, constraints: readonly Constraint[], f
   const text = phase.equation ?? '';
   const terms = parseEquation(withExchangeSite(text)).terms;
   checkBalanced(terms, phase.name, field, text);
+  const dissolved = terms.filter((term) => isDissolved(term.formula));
   return constraints.map((constraint) =>
-    terms.filter((term) => isDissolved(term.formula)).reduce((sum, term) => sum.add(termSign(term).mul(amountOf(term.formula, constraint))), Rational.ZERO),
+    dissolved.reduce((sum, term) => sum.add(termSign(term).mul(amountOf(term.formula, constraint))), Rational.ZERO),
   );
 }
 
