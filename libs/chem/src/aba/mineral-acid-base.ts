@@ -4,7 +4,7 @@
  */
 import { balanceEquation } from '../balance/balance-equation';
 import { protonBudget } from '../budget/proton-budget';
-import { molarMassExact } from '../convert/molar-mass';
+import { CACO3_MOLAR_MASS, molarMassExact } from '../convert/molar-mass';
 import { ChemError } from '../errors/chem-error';
 import { parseEquation } from '../equation/parse-equation';
 import { Rational } from '../rational/rational';
@@ -92,7 +92,7 @@ function factorOf(text: string, formula: string, pathway: CarbonatePathway): { e
   const perMole = protonBudget(parseEquation(balanced.equation), { reference: formula }).perMole;
   const protonsPerCaco3 = pathway === 'co2' ? 2 : 1;
   // 1 wt% = 10 kg/t = 10^4 g/t; kg CaCO3 = mol H+ × M(CaCO3) / (H+ per CaCO3) / 1000.
-  const perPercent = perMole.mul(Rational.of(10000)).div(molarMassExact(formula)).mul(molarMassExact('CaCO3')).div(Rational.of(protonsPerCaco3 * 1000));
+  const perPercent = perMole.mul(Rational.of(10000)).div(molarMassExact(formula)).mul(CACO3_MOLAR_MASS).div(Rational.of(protonsPerCaco3 * 1000));
   return { equation: balanced.equation, perMole, perPercent: perPercent.toNumber() };
 }
 

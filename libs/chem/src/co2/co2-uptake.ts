@@ -2,7 +2,7 @@
  * Theoretical CO2 uptake of minerals and rocks by weathering: per mineral from its cations, per
  * rock from modes, and from an oxide analysis by a Steinour-type formula (Renforth 2019).
  */
-import { molarMassExact } from '../convert/molar-mass';
+import { CO2_MOLAR_MASS, molarMassExact } from '../convert/molar-mass';
 import { ChemError } from '../errors/chem-error';
 import { parseFormula } from '../formula/parse-formula';
 import { Rational } from '../rational/rational';
@@ -55,7 +55,7 @@ export function mineralCo2Uptake(formula: string): MineralCo2Uptake {
   const atLeastZero = (value: Rational): Rational => (value.sign() < 0 ? Rational.ZERO : value);
   const bicarbonate = atLeastZero(divalent.mul(Rational.of(2)).add(monovalent).sub(held));
   const carbonate = atLeastZero(divalent.add(monovalent.div(Rational.of(2))).sub(held));
-  const perTonne = (moles: Rational): number => moles.mul(molarMassExact('CO2')).div(molarMassExact(parsed)).toNumber();
+  const perTonne = (moles: Rational): number => moles.mul(CO2_MOLAR_MASS).div(molarMassExact(parsed)).toNumber();
   const cautions: string[] = [CO2_CAUTIONS.THEORETICAL];
   if (!held.isZero()) cautions.push(CO2_CAUTIONS.CARBONATE_IN_ROCK);
   if (parsed.composition.has('Fe')) cautions.push(CO2_CAUTIONS.IRON_EXCLUDED);
@@ -106,7 +106,7 @@ export function oxideCo2Potential(oxides: Readonly<Record<string, number>>): Oxi
   }
   const moles = (key: string): number => (oxides[key] ?? 0) / molarMassExact(key).toNumber();
   const cations = TERMS.reduce((sum, [key, weight]) => sum + weight * moles(key), 0);
-  const co2 = molarMassExact('CO2').toNumber();
+  const co2 = CO2_MOLAR_MASS.toNumber();
   const carbonateMol = Math.max(0, cations - moles('CO2') - moles('SO3'));
   const bicarbonateMol = Math.max(0, 2 * cations - moles('CO2') - 2 * moles('SO3'));
   const cautions: string[] = [CO2_CAUTIONS.THEORETICAL, CO2_CAUTIONS.NON_CARBONIC_ACID, CO2_CAUTIONS.OCEAN_EFFICIENCY];

@@ -36,6 +36,12 @@ export function molarMass(formula: Formula | string): number {
   return molarMassExact(formula).toNumber();
 }
 
+/** Exact molar mass of CaCO3, 100.086 g/mol: the unit of acid-base accounts. */
+export const CACO3_MOLAR_MASS = molarMassExact('CaCO3');
+
+/** Exact molar mass of CO2, 44.009 g/mol. */
+export const CO2_MOLAR_MASS = molarMassExact('CO2');
+
 /**
  * Mass fraction of each element (0–1).
  * @example massFractions('CaCO3').get('Ca'); // ≈ 0.40044
@@ -65,7 +71,7 @@ export function molesPerKg(formula: Formula | string): number {
  */
 export function tonnesCo2PerTonne(formula: Formula | string, co2PerMole: Rational | number): number {
   const moles = co2PerMole instanceof Rational ? co2PerMole : Rational.fromNumber(co2PerMole);
-  return moles.mul(molarMassExact('CO2')).div(molarMassExact(formula)).toNumber();
+  return moles.mul(CO2_MOLAR_MASS).div(molarMassExact(formula)).toNumber();
 }
 
 /**
@@ -75,5 +81,5 @@ export function tonnesCo2PerTonne(formula: Formula | string, co2PerMole: Rationa
  * @example caco3KgPerTonne(623.8); // ≈ 31.22 (1 wt% S as pyrite)
  */
 export function caco3KgPerTonne(protonsPerTonne: number): number {
-  return (protonsPerTonne * molarMassExact('CaCO3').toNumber()) / 2 / 1000;
+  return (protonsPerTonne * CACO3_MOLAR_MASS.toNumber()) / 2 / 1000;
 }

@@ -2,7 +2,7 @@
  * Concentration values and units of water analyses. Water work is measurement: values are
  * numbers (doubles); molar masses come exactly from the IUPAC 2021 abridged weights.
  */
-import { molarMassExact } from '../convert/molar-mass';
+import { CACO3_MOLAR_MASS, molarMassExact } from '../convert/molar-mass';
 import { ChemError } from '../errors/chem-error';
 import { type Solute } from './solutes';
 
@@ -64,7 +64,7 @@ export function isConcentrationUnit(unit: string): unit is ConcentrationUnit {
 }
 
 /** mg CaCO3 per meq: M(CaCO3)/2 = 50.043 (Standard Methods 2320). */
-export const CACO3_MG_PER_MEQ = molarMassExact('CaCO3').toNumber() / 2;
+export const CACO3_MG_PER_MEQ = CACO3_MOLAR_MASS.toNumber() / 2;
 
 function badUnit(unit: string, solute: Solute, field: string, reason: string): ChemError {
   return new ChemError('WATER_BAD_UNIT', `${reason} (${solute.key} in "${unit}").`, { start: 0, end: unit.length }, { field, unit });
