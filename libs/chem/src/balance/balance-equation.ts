@@ -36,14 +36,15 @@ function orient(vector: readonly bigint[]): Rational[] {
   return vector.map((value) => Rational.of(flip ? -value : value));
 }
 
-function impossible(problem: Problem, freedom: number, warnings: ChemWarning[]): BalanceResult {
+/** @param basis the null space of `problem.matrix.rows`, as the caller already computed it */
+function impossible(problem: Problem, basis: readonly (readonly bigint[])[], warnings: ChemWarning[]): BalanceResult {
   const columns = problem.equation.terms.length;
-  const isTrivial = integerNullSpace(problem.matrix.rows, columns).length === 0;
+  const isTrivial = basis.length === 0;
   const elementRows = problem.matrix.rows.slice(0, problem.matrix.labels.length);
   const matrix = { ...problem.matrix, rows: elementRows };
   return {
     status: 'impossible',
-    freedom,
+    freedom: 0,
     terms: problem.equation.terms.map((term) => ({
       formula: term.formula.text,
       side: term.side,
@@ -70,7 +71,7 @@ function checkGiven(problem: Problem): BalanceResult {
 function balanceFree(problem: Problem): BalanceResult {
   const columns = problem.equation.terms.length;
   const basis = integerNullSpace(problem.matrix.rows, columns);
-  if (basis.length === 0) return impossible(problem, 0, []);
+  if (basis.length === 0) return impossible(problem, basis, []);
   if (basis.length > 1) return describeOpen(problem.equation, basis, basis.length, null);
   return finishBalanced(problem.equation, orient(basis[0]), problem.normalize);
 }
@@ -83,7 +84,7 @@ function balancePinned(problem: Problem): BalanceResult {
       code: 'BALANCE_PINS_CONFLICT',
       message: 'No balance honours the fixed coefficients; change or remove some of them.',
     };
-    return impossible(problem, 0, [warning]);
+    return impossible(problem, integerNullSpace(problem.matrix.rows, columns), [warning]);
   }
   if (solution.freedom === 1) return finishBalanced(problem.equation, solution.particular, problem.normalize);
   const basis = integerNullSpace(problem.matrix.rows, columns);
