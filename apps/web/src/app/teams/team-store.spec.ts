@@ -63,6 +63,20 @@ describe('TeamStore', () => {
     expect(store.teams()).toEqual([]);
   });
 
+  it.each([
+    { role: 'owner', isOwner: true, isReviewer: true, canWrite: true },
+    { role: 'reviewer', isOwner: false, isReviewer: true, canWrite: true },
+    { role: 'editor', isOwner: false, isReviewer: false, canWrite: true },
+    { role: 'viewer', isOwner: false, isReviewer: false, canWrite: false },
+  ])('gives the rights of a $role in the current team', ({ role, isOwner, isReviewer, canWrite }) => {
+    signIn('ana');
+    store.load().subscribe();
+    httpTesting.expectOne('/api/teams').flush([{ id: 't1', name: 'Ironbark Creek', role }]);
+    store.select('t1');
+
+    expect({ isOwner: store.isOwner(), isReviewer: store.isReviewer(), canWrite: store.canWrite() }).toEqual({ isOwner, isReviewer, canWrite });
+  });
+
   it('opens the team used last, else the first', () => {
     signIn('ana');
     store.load().subscribe();

@@ -1,6 +1,6 @@
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { Observable, of, tap } from 'rxjs';
-import type { TeamSummary } from '@tallus/contracts';
+import type { Role, TeamSummary } from '@tallus/contracts';
 
 import { AuthStore } from '../auth/auth-store';
 import { hasRoleAtLeast } from './roles';
@@ -32,11 +32,10 @@ export class TeamStore {
   );
   /** Whether the user owns the current team (manages members and invitations). */
   readonly isOwner = computed(() => this.currentTeam()?.role === 'owner');
+  /** Whether the user may vet or return reaction sets in the current team (reviewer or above). */
+  readonly isReviewer = computed(() => this.hasCurrentRole('reviewer'));
   /** Whether the user may write in the current team (editor or above). */
-  readonly canWrite = computed(() => {
-    const team = this.currentTeam();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
+  readonly canWrite = computed(() => this.hasCurrentRole('editor'));
 
   /** Loads the user's teams from the API. */
   load(): Observable<TeamSummary[]> {
@@ -84,6 +83,11 @@ export class TeamStore {
     return teams.find((team) => team.id === lastId) ?? teams[0] ?? null;
   }
 
+  /** Whether the user's role in the current team is `required` or above; false without a team. */
+  private hasCurrentRole(required: Role): boolean {
+    const team = this.currentTeam();
+    return team ? hasRoleAtLeast(team.role, required) : false;
+  }
 }
 
 function sortByName(teams: TeamSummary[]): TeamSummary[] {

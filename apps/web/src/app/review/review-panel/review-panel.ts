@@ -1,5 +1,5 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -17,7 +17,6 @@ import { toProblem } from '../../core/problem';
 import { ReactionSetStore } from '../../reaction-sets/reaction-set-store';
 import { ReactionSetsApi } from '../../reaction-sets/reaction-sets-api';
 import { reviewStateView } from '../../reaction-sets/review-state';
-import { hasRoleAtLeast } from '../../teams/roles';
 import { TeamStore } from '../../teams/team-store';
 import { RevisionDiff } from '../revision-diff/revision-diff';
 
@@ -45,9 +44,6 @@ export class ReviewPanel {
   private readonly authStore = inject(AuthStore);
   private readonly notifier = inject(Notifier);
 
-  /** The team's id. */
-  readonly teamId = input.required<string>();
-
   protected readonly set = this.store.set;
   protected readonly comment = new FormControl('', { nonNullable: true });
   protected readonly isWorking = signal(false);
@@ -57,7 +53,7 @@ export class ReviewPanel {
   protected readonly current = CURRENT;
   protected readonly actionLabels = ACTION_LABELS;
 
-  protected readonly role = computed(() => this.teamStore.currentTeam()?.role ?? 'viewer');
+  protected readonly isOwner = this.teamStore.isOwner;
   protected readonly stateView = computed(() => reviewStateView(this.set()?.reviewState ?? 'draft'));
   protected readonly isSubmitter = computed(() => {
     const submitter = this.set()?.submittedBy;
@@ -65,17 +61,15 @@ export class ReviewPanel {
   });
   protected readonly canSubmit = computed(() => {
     const state = this.set()?.reviewState;
-    return hasRoleAtLeast(this.role(), 'editor') && (state === 'draft' || state === 'returned');
+    return this.teamStore.canWrite() && (state === 'draft' || state === 'returned');
   });
-  protected readonly canDecide = computed(() => this.set()?.reviewState === 'in_review' && hasRoleAtLeast(this.role(), 'reviewer'));
-  protected readonly latestRevision = computed(() => {
-    const revisions = this.set()?.revisions ?? [];
-    return revisions.reduce<(typeof revisions)[number] | null>((latest, revision) => (!latest || revision.number > latest.number ? revision : latest), null);
-  });
-  protected readonly canPublish = computed(
-    () => this.set()?.reviewState === 'vetted' && this.role() === 'owner' && this.latestRevision()?.publicationId === null,
-  );
+  protected readonly canDecide = computed(() => this.set()?.reviewState === 'in_review' && this.teamStore.isReviewer());
+  /** Vetted revisions, newest first (as the API sends them; sorted again, as cheap insurance). */
   protected readonly revisions = computed(() => [...(this.set()?.revisions ?? [])].sort((a, b) => b.number - a.number));
+  protected readonly latestRevision = computed(() => this.revisions()[0] ?? null);
+  protected readonly canPublish = computed(
+    () => this.set()?.reviewState === 'vetted' && this.isOwner() && this.latestRevision()?.publicationId === null,
+  );
   protected readonly history = computed(() => [...(this.set()?.comments ?? [])].sort((a, b) => b.createdAt.localeCompare(a.createdAt)));
 
   private readonly setId = computed(() => this.set()?.id ?? null);

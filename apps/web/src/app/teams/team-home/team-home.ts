@@ -15,7 +15,7 @@ import { ImportDialog } from '../../reaction-sets/import-dialog/import-dialog';
 import { NewSetDialog } from '../../reaction-sets/new-set-dialog/new-set-dialog';
 import { ReactionSetsApi } from '../../reaction-sets/reaction-sets-api';
 import { SetTable } from '../../reaction-sets/set-table/set-table';
-import { hasRoleAtLeast, roleView } from '../roles';
+import { roleView } from '../roles';
 import { TeamStore } from '../team-store';
 
 /** A team's home: its reaction sets, the review queue for reviewers, and recent activity. */
@@ -41,14 +41,8 @@ export class TeamHome {
     const team = this.team();
     return team ? roleView(team.role) : null;
   });
-  protected readonly canWrite = computed(() => {
-    const team = this.team();
-    return team ? hasRoleAtLeast(team.role, 'editor') : false;
-  });
-  protected readonly isReviewer = computed(() => {
-    const team = this.team();
-    return team ? hasRoleAtLeast(team.role, 'reviewer') : false;
-  });
+  protected readonly canWrite = this.teamStore.canWrite;
+  protected readonly isReviewer = this.teamStore.isReviewer;
   protected readonly sets = rxResource({
     params: () => this.teamId(),
     stream: ({ params: teamId }) => this.api.listSets(teamId),
