@@ -15,6 +15,7 @@ import { toProblem } from '../../core/problem';
 import { NetComposer } from '../../net-reactions/net-composer/net-composer';
 import { ProtonChart } from '../../net-reactions/proton-chart/proton-chart';
 import { ReviewPanel } from '../../review/review-panel/review-panel';
+import { fileNameOf, saveBlob } from '../../site-data/save-file';
 import { TeamStore } from '../../teams/team-store';
 import { ReactionEditor } from '../reaction-editor/reaction-editor';
 import { ReactionList, ReactionMove } from '../reaction-list/reaction-list';
@@ -129,21 +130,8 @@ export class SetEditor {
     const set = this.set();
     if (!set) return;
     this.api.export(set.id, format).subscribe({
-      next: (blob) => saveBlob(blob, `${fileName(set.name)}.${format}`),
+      next: (blob) => saveBlob(blob, `${fileNameOf(set.name, 'reaction-set')}.${format}`),
       error: (error: unknown) => this.notifier.problem(toProblem(error)),
     });
   }
-}
-
-function fileName(name: string): string {
-  return name.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').toLowerCase() || 'reaction-set';
-}
-
-function saveBlob(blob: Blob, name: string): void {
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = name;
-  link.click();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
 }
