@@ -32,7 +32,11 @@ function exactRow(terms: readonly MatrixTerm[], amountOf: (formula: Formula) => 
   });
 }
 
-function toIntegers(row: readonly Rational[]): bigint[] {
+/**
+ * A rational row times the lcm of its denominators: whole numbers with the same null space.
+ * @example toIntegerRow([Rational.of(1, 2), Rational.of(2, 3)]); // [3n, 4n]
+ */
+export function toIntegerRow(row: readonly Rational[]): bigint[] {
   let scale = 1n;
   for (const value of row) scale = lcmBig(scale, value.den);
   return row.map((value) => (value.num * scale) / value.den);
@@ -54,5 +58,5 @@ export function buildSpeciesMatrix(terms: readonly MatrixTerm[]): SpeciesMatrix 
     labels.push(CHARGE_ROW);
     exactRows.push(exactRow(terms, (formula) => formula.charge));
   }
-  return { labels, rows: exactRows.map(toIntegers), exactRows };
+  return { labels, rows: exactRows.map(toIntegerRow), exactRows };
 }

@@ -2,12 +2,13 @@
  * Net reactions: exact multipliers that make named intermediates cancel in a sum of reactions.
  */
 import { solvePinned } from '../balance/solve-pinned';
+import { toIntegerRow } from '../balance/species-matrix';
 import { isChemError, type ChemIssue } from '../errors/chem-error';
 import type { ChemWarning } from '../errors/chem-warning';
 import type { Equation, Side } from '../equation/equation';
 import { formatEquation } from '../equation/format-equation';
 import type { Formula } from '../formula/formula';
-import { lcmBig, Rational } from '../rational/rational';
+import { Rational } from '../rational/rational';
 import { buildCombineProblem, type CombineProblem } from './combine-problem';
 
 /** One reaction of a combination, with an optional fixed multiplier. */
@@ -54,14 +55,6 @@ export interface CombineResult {
   readonly error?: ChemIssue & { readonly reaction?: number; readonly cancel?: number };
 }
 
-function toRows(problem: CombineProblem): bigint[][] {
-  return problem.cancelRows.map((row) => {
-    let scale = 1n;
-    for (const value of row) scale = lcmBig(scale, value.den);
-    return row.map((value) => (value.num * scale) / value.den);
-  });
-}
-
 function netTerms(problem: CombineProblem, multipliers: readonly Rational[]): PlacedTerm[] {
   const placed = problem.species.flatMap((formula, index): PlacedTerm[] => {
     const total = problem.net.reduce((sum, row, reaction) => sum.add(row[index].mul(multipliers[reaction])), Rational.ZERO);
@@ -102,7 +95,7 @@ export function combineReactions(input: CombineInput): CombineResult {
     const cancel = typeof where.cancel === 'number' ? where.cancel : undefined;
     return result('invalid', { freedom: 0, error: { ...error.toIssue(), reaction, cancel } }, count);
   }
-  const solution = solvePinned(toRows(problem), count, problem.pins);
+  const solution = solvePinned(problem.cancelRows.map(toIntegerRow), count, problem.pins);
   if (solution.particular === null) return result('none', { freedom: 0, warnings: problem.warnings }, count);
   if (solution.freedom > 1) {
     const fixed = solution.particular.map((value, index) =>

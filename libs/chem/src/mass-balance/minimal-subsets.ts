@@ -5,7 +5,8 @@
  * dependent on the chosen ones (no superset can be independent) or the subset fits (every
  * superset would contain a smaller fitting set, so none is minimal).
  */
-import { gcdBig, lcmBig, Rational } from '../rational/rational';
+import { toIntegerRow } from '../balance/species-matrix';
+import { gcdBig, Rational } from '../rational/rational';
 
 /** One minimal fitting subset: column indices (ascending) and their exact coefficients. */
 export interface FittingSubset {
@@ -24,13 +25,9 @@ function abs(value: bigint): bigint {
   return value < 0n ? -value : value;
 }
 
-/** Scales each rational row (matrix row and its target entry) to integers with gcd 1. */
+/** Scales each rational row (matrix row and its target entry) to integers, as {@link toIntegerRow}. */
 export function integerRows(matrix: readonly (readonly Rational[])[], target: readonly Rational[]): bigint[][] {
-  return matrix.map((row, index) => {
-    const entries = [...row, target[index]];
-    const scale = entries.reduce((acc, value) => lcmBig(acc, value.den), 1n);
-    return entries.map((value) => (value.num * scale) / value.den);
-  });
+  return matrix.map((row, index) => toIntegerRow([...row, target[index]]));
 }
 
 function choosePivot(rows: readonly (readonly bigint[])[], from: number, column: number): number {
