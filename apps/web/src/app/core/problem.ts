@@ -45,11 +45,6 @@ export function toProblem(error: unknown): Problem {
   return unknownProblem(error.status, error.statusText);
 }
 
-/** Whether a problem concerns the request's fields rather than the request as a whole. */
-export function hasIssues(problem: Problem): boolean {
-  return (problem.issues?.length ?? 0) > 0;
-}
-
 function unknownProblem(status: number, title: string | undefined): Problem {
   return {
     type: 'about:blank',

@@ -1,12 +1,4 @@
-import { fileNameOf, toCsv } from './save-file';
-
-describe('toCsv', () => {
-  it('quotes cells with commas, quotes and line breaks, and leaves missing values empty', () => {
-    expect(toCsv(['phase', 'transfer (mmol/kg)'], [['plagioclase, An38', '1/5'], ['say "hi"', null]])).toBe(
-      'phase,transfer (mmol/kg)\r\n"plagioclase, An38",1/5\r\n"say ""hi""",\r\n',
-    );
-  });
-});
+import { fileNameOf } from './save-file';
 
 describe('fileNameOf', () => {
   it.each([

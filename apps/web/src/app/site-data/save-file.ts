@@ -22,17 +22,3 @@ export function saveBlob(blob: Blob, name: string): void {
 export function fileNameOf(title: string, fallback: string): string {
   return title.replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').toLowerCase() || fallback;
 }
-
-/**
- * CSV text of a table (RFC 4180 quoting), for client-side exports of computed tables.
- *
- * @param header column names, units in them
- * @param rows cells as text or numbers; null becomes empty
- */
-export function toCsv(header: readonly string[], rows: readonly (readonly (string | number | null)[])[]): string {
-  const cell = (value: string | number | null): string => {
-    const text = value === null ? '' : String(value);
-    return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-  };
-  return [header, ...rows].map((row) => row.map(cell).join(',')).join('\r\n') + '\r\n';
-}

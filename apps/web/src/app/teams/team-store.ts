@@ -24,8 +24,6 @@ export class TeamStore {
     const loaded = this.loadedState();
     return loaded !== null && loaded.token === this.authStore.token() ? loaded.teams : null;
   });
-  /** Id of the team the user works in now. */
-  readonly currentTeamId = this.currentTeamIdState.asReadonly();
   /** The team the user works in now, once teams are loaded. */
   readonly currentTeam = computed(
     () => this.teams()?.find((team) => team.id === this.currentTeamIdState()) ?? null,

@@ -1,4 +1,4 @@
-import { Injectable, computed, inject, signal } from '@angular/core';
+import { Injectable, inject, signal } from '@angular/core';
 import { Observable, forkJoin, of, tap } from 'rxjs';
 import type { Invitation, Member, Role } from '@tallus/contracts';
 
@@ -22,10 +22,6 @@ export class MembersStore {
   readonly invitations = this.invitationsState.asReadonly();
   /** Members with a change under way, whose controls wait. */
   readonly busyUserIds = this.busyUserIdsState.asReadonly();
-  /** How many owners the team has. */
-  readonly ownerCount = computed(
-    () => this.membersState()?.filter((member) => member.role === 'owner').length ?? 0,
-  );
 
   /**
    * Loads members, and pending invitations when the user is an owner.
