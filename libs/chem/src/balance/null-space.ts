@@ -16,10 +16,15 @@ function abs(value: bigint): bigint {
   return value < 0n ? -value : value;
 }
 
-function divideByContent(row: bigint[]): void {
+/**
+ * Divides a row in place by the gcd of its entries (its content), making it primitive; returns it.
+ * @example divideByContent([4n, -6n, 0n]); // [2n, -3n, 0n]
+ */
+export function divideByContent(row: bigint[]): bigint[] {
   let content = 0n;
   for (const value of row) if (value !== 0n) content = gcdBig(content, value);
   if (content > 1n) for (let index = 0; index < row.length; index += 1) row[index] /= content;
+  return row;
 }
 
 function choosePivot(rows: readonly bigint[][], from: number, column: number): number {

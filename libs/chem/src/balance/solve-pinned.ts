@@ -3,8 +3,8 @@
  * as one extra column with unknown `t`; null space vectors with `t ≠ 0`, scaled to `t = 1`, are the
  * balances that honour the pins, and those with `t = 0` are the directions left free.
  */
-import { gcdBig, lcmBig, Rational } from '../rational/rational';
-import { integerNullSpace } from './null-space';
+import { lcmBig, Rational } from '../rational/rational';
+import { divideByContent, integerNullSpace } from './null-space';
 
 /** The balances that honour the pins. */
 export interface PinnedSolution {
@@ -14,12 +14,6 @@ export interface PinnedSolution {
   readonly particular: readonly Rational[] | null;
   /** Directions that may be added to `particular` without breaking the balance or the pins. */
   readonly directions: readonly (readonly bigint[])[];
-}
-
-function primitive(vector: bigint[]): bigint[] {
-  let content = 0n;
-  for (const value of vector) if (value !== 0n) content = gcdBig(content, value);
-  return content > 1n ? vector.map((value) => value / content) : vector;
 }
 
 /**
@@ -66,6 +60,6 @@ export function solvePinned(
   free.forEach((column, index) => (particular[column] = Rational.of(anchor[index], anchor[t] * scale)));
   const directions = basis
     .filter((vector) => vector !== anchor)
-    .map((vector) => primitive(expand(vector.slice(0, t).map((value, index) => value * anchor[t] - anchor[index] * vector[t]))));
+    .map((vector) => divideByContent(expand(vector.slice(0, t).map((value, index) => value * anchor[t] - anchor[index] * vector[t]))));
   return { freedom: basis.length, particular, directions };
 }
