@@ -93,6 +93,17 @@ describe('rock samples: acid-base accounting (Sobek et al. 1978) and CO2 uptake'
     expect((await list()).length).toBe(before);
   });
 
+  it('When a rock sample is added or renamed with a name the team uses, then 409 ROCK_SAMPLE_DUPLICATE names it', async () => {
+    await save({ name: 'Taken rock', totalSulfurPercent: 1 });
+    const other = await save({ name: 'Free rock', totalSulfurPercent: 1 });
+
+    const added = await request(app()).post(`/api/teams/${teamId}/rock-samples`).set('Authorization', editor.auth).send({ name: 'Taken rock' }).expect(409);
+    const renamed = await request(app()).patch(`/api/rock-samples/${other.id}`).set('Authorization', editor.auth).send({ name: 'Taken rock', version: other.version }).expect(409);
+
+    expect([added.body.code, added.body.detail]).toEqual(['ROCK_SAMPLE_DUPLICATE', 'The team already has a rock sample named "Taken rock".']);
+    expect(renamed.body.code).toBe('ROCK_SAMPLE_DUPLICATE');
+  });
+
   it('When a rock CSV has no sample column, then even with skipInvalid the import answers 400 CSV_MISSING_VALUE on the header and saves nothing', async () => {
     const before = (await list()).length;
 

@@ -99,6 +99,16 @@ describe('water analyses: conversions and charge balance', () => {
     const clash = await request(app()).post(`/api/teams/${teamId}/water-analyses`).set('Authorization', editor.auth).send(mmolWater('Twin', { Na: '2' })).expect(409);
     expect(clash.body.code).toBe('WATER_ANALYSIS_DUPLICATE');
   });
+
+  it('When an analysis is renamed to a name the team uses, then 409 WATER_ANALYSIS_DUPLICATE names it, and keeping its own name is no clash', async () => {
+    await saveWater(app(), editor, teamId, mmolWater('Renamed twin', { Na: '1' }));
+    const other = await saveWater(app(), editor, teamId, mmolWater('To rename', { Na: '2' }));
+
+    const clash = await request(app()).patch(`/api/water-analyses/${other.id}`).set('Authorization', editor.auth).send({ name: 'Renamed twin', version: other.version }).expect(409);
+    await request(app()).patch(`/api/water-analyses/${other.id}`).set('Authorization', editor.auth).send({ name: 'To rename', version: other.version }).expect(200);
+
+    expect([clash.body.code, clash.body.detail]).toEqual(['WATER_ANALYSIS_DUPLICATE', 'The team already has a water analysis named "Renamed twin".']);
+  });
 });
 
 describe('water analyses: CSV header problems', () => {

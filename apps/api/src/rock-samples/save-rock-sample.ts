@@ -20,11 +20,14 @@ import { rockInputsOf, toRockView } from './to-rock-view';
  */
 export async function addRockSamples(tx: EntityManager, input: { teamId: string; actorId: string; requests: CreateRockSampleRequest[]; action: string }): Promise<RockSample[]> {
   const settings = await loadTeamSettings(tx, input.teamId);
+  // One query for the whole batch; names added earlier in the batch join the set as they go.
+  const taken = await takenNames(tx, input.teamId, input.requests.map((request) => request.name));
   const rows = [];
   for (const request of input.requests) {
     const { name, site, lithology, notes, ...measured } = request;
     computeRockFigures(measured, settings);
-    await assertUniqueName(tx, input.teamId, name);
+    if (taken.has(name)) throw duplicateName(name);
+    taken.add(name);
     const row = tx.create(RockSample, { id: randomUUID(), team: ref(tx.getReference(Team, input.teamId)), name, site, lithology, notes, ...measured });
     recordAudit(tx, { teamId: input.teamId, actorId: input.actorId, action: input.action, entityType: 'rock_sample', entityId: row.id, summary: `Added rock sample ${name}` });
     rows.push(row);
@@ -52,7 +55,7 @@ export async function updateRockSample(em: EntityManager, input: { id: string; a
     const row = await tx.findOneOrFail(RockSample, input.id, { refresh: true });
     assertVersion(row.version, version);
     const teamId = row.team.id;
-    if (changes.name !== undefined && changes.name !== row.name) await assertUniqueName(tx, teamId, changes.name);
+    if (changes.name !== undefined && changes.name !== row.name && (await takenNames(tx, teamId, [changes.name])).size > 0) throw duplicateName(changes.name);
     const defined = Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined));
     const settings = await loadTeamSettings(tx, teamId);
     computeRockFigures({ ...rockInputsOf(row), ...defined }, settings);
@@ -73,6 +76,13 @@ export async function deleteRockSample(em: EntityManager, id: string, actorId: s
   });
 }
 
-async function assertUniqueName(em: EntityManager, teamId: string, name: string): Promise<void> {
-  if ((await em.count(RockSample, { team: teamId, name })) > 0) throw new ConflictError('ROCK_SAMPLE_DUPLICATE', `The team already has a rock sample named "${name}".`);
+/** Which of these names the team's rock samples already use. */
+async function takenNames(em: EntityManager, teamId: string, names: readonly string[]): Promise<Set<string>> {
+  if (names.length === 0) return new Set();
+  const rows = await em.find(RockSample, { team: teamId, name: { $in: [...new Set(names)] } }, { fields: ['name'] });
+  return new Set(rows.map((row) => row.name));
+}
+
+function duplicateName(name: string): ConflictError {
+  return new ConflictError('ROCK_SAMPLE_DUPLICATE', `The team already has a rock sample named "${name}".`);
 }

@@ -29,11 +29,14 @@ export interface CreateWaterInput {
  */
 export async function addWaterAnalyses(tx: EntityManager, input: { teamId: string; actorId: string; requests: CreateWaterAnalysisRequest[]; action: string }): Promise<WaterAnalysis[]> {
   const settings = await loadTeamSettings(tx, input.teamId);
+  // One query for the whole batch; names added earlier in the batch join the set as they go.
+  const taken = await takenNames(tx, input.teamId, input.requests.map((request) => request.name));
   const rows = [];
   for (const request of input.requests) {
     const solutes = toStoredSolutes(request.solutes);
     computeWaterFigures(solutes, request.pH, settings);
-    await assertUniqueName(tx, input.teamId, request.name);
+    if (taken.has(request.name)) throw duplicateName(request.name);
+    taken.add(request.name);
     const row = tx.create(WaterAnalysis, {
       id: randomUUID(),
       team: ref(tx.getReference(Team, input.teamId)),
@@ -77,7 +80,7 @@ export async function updateWaterAnalysis(em: EntityManager, input: { id: string
     assertVersion(row.version, version);
     const teamId = row.team.id;
     const settings = await loadTeamSettings(tx, teamId);
-    if (fields.name !== undefined && fields.name !== row.name) await assertUniqueName(tx, teamId, fields.name);
+    if (fields.name !== undefined && fields.name !== row.name && (await takenNames(tx, teamId, [fields.name])).size > 0) throw duplicateName(fields.name);
     const nextSolutes = solutes === undefined ? row.solutes : toStoredSolutes(solutes);
     const nextPh = pH === undefined ? (row.ph === null || row.ph === undefined ? null : Number(row.ph)) : pH;
     computeWaterFigures(nextSolutes, nextPh, settings);
@@ -105,7 +108,13 @@ export async function deleteWaterAnalysis(em: EntityManager, id: string, actorId
   });
 }
 
-async function assertUniqueName(em: EntityManager, teamId: string, name: string): Promise<void> {
-  const clash = await em.count(WaterAnalysis, { team: teamId, name });
-  if (clash > 0) throw new ConflictError('WATER_ANALYSIS_DUPLICATE', `The team already has a water analysis named "${name}".`);
+/** Which of these names the team's water analyses already use. */
+async function takenNames(em: EntityManager, teamId: string, names: readonly string[]): Promise<Set<string>> {
+  if (names.length === 0) return new Set();
+  const rows = await em.find(WaterAnalysis, { team: teamId, name: { $in: [...new Set(names)] } }, { fields: ['name'] });
+  return new Set(rows.map((row) => row.name));
+}
+
+function duplicateName(name: string): ConflictError {
+  return new ConflictError('WATER_ANALYSIS_DUPLICATE', `The team already has a water analysis named "${name}".`);
 }
