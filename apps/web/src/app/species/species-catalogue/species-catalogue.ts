@@ -18,6 +18,7 @@ import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { TeamStore } from '../../teams/team-store';
 import { SpeciesApi } from '../species-api';
+import { formatOxidationStates } from '../species-dialog/oxidation-states-text';
 import { SpeciesDialog } from '../species-dialog/species-dialog';
 import { FormulaText } from '../../chem-view/formula-text/formula-text';
 
@@ -90,8 +91,7 @@ export class SpeciesCatalogue {
   }
 
   protected statesText(entry: Species): string {
-    const states = entry.oxidationStates;
-    return states ? Object.entries(states).map(([element, state]) => `${element} ${state}`).join(', ') : '';
+    return formatOxidationStates(entry.oxidationStates);
   }
 
   protected open(entry: Species | null): void {
