@@ -27,7 +27,11 @@ export function divideByContent(row: bigint[]): bigint[] {
   return row;
 }
 
-function choosePivot(rows: readonly bigint[][], from: number, column: number): number {
+/**
+ * The row at or after `from` whose entry in `column` is the smallest non-zero in absolute value
+ * (the first of equals), or -1 when all are zero. Small pivots keep the integers short.
+ */
+export function choosePivot(rows: readonly (readonly bigint[])[], from: number, column: number): number {
   let best = -1;
   for (let index = from; index < rows.length; index += 1) {
     const value = rows[index][column];

@@ -5,6 +5,7 @@
  * dependent on the chosen ones (no superset can be independent) or the subset fits (every
  * superset would contain a smaller fitting set, so none is minimal).
  */
+import { choosePivot } from '../balance/null-space';
 import { toIntegerRow } from '../balance/species-matrix';
 import { gcdBig, Rational } from '../rational/rational';
 
@@ -21,22 +22,9 @@ interface Node {
   readonly chosen: readonly number[];
 }
 
-function abs(value: bigint): bigint {
-  return value < 0n ? -value : value;
-}
-
 /** Scales each rational row (matrix row and its target entry) to integers, as {@link toIntegerRow}. */
 export function integerRows(matrix: readonly (readonly Rational[])[], target: readonly Rational[]): bigint[][] {
   return matrix.map((row, index) => toIntegerRow([...row, target[index]]));
-}
-
-function choosePivot(rows: readonly (readonly bigint[])[], from: number, column: number): number {
-  let best = -1;
-  for (let index = from; index < rows.length; index += 1) {
-    const value = rows[index][column];
-    if (value !== 0n && (best < 0 || abs(value) < abs(rows[best][column]))) best = index;
-  }
-  return best;
 }
 
 /** Columns still relevant below a node: the chosen pivots, the columns after `column`, and b. */
