@@ -3,7 +3,7 @@
  */
 import { ChemError, type Span } from '../errors/chem-error';
 import { parseFormulaIn } from '../formula/parse-formula';
-import { isSpace } from '../formula/scanner';
+import { isSpace, trimRange } from '../formula/scanner';
 import { parseCoefficient } from './coefficient';
 import type { Equation, EquationTerm, Side } from './equation';
 
@@ -18,13 +18,6 @@ function findArrows(text: string): Span[] {
     index += arrow.length - 1;
   }
   return found;
-}
-
-function trim(text: string, range: Span): Span {
-  let { start, end } = range;
-  while (start < end && isSpace(text[start])) start += 1;
-  while (end > start && isSpace(text[end - 1])) end -= 1;
-  return { start, end };
 }
 
 /** Term ranges of one side: a `+` preceded by white space (or opening the side) separates terms. */
@@ -42,7 +35,7 @@ function splitTerms(text: string, side: Span): Span[] {
 }
 
 function parseTerm(text: string, range: Span, side: Side): EquationTerm {
-  const span = trim(text, range);
+  const span = trimRange(text, range);
   if (span.start === span.end) {
     throw new ChemError('EQUATION_EMPTY_TERM', "A '+' has no term on one side of it.", {
       start: range.start,
@@ -55,7 +48,7 @@ function parseTerm(text: string, range: Span, side: Side): EquationTerm {
 }
 
 function parseSide(text: string, range: Span, side: Side): EquationTerm[] {
-  const trimmed = trim(text, range);
+  const trimmed = trimRange(text, range);
   if (trimmed.start === trimmed.end) {
     throw new ChemError('EQUATION_EMPTY_SIDE', `The ${side}-hand side of the equation is empty.`, range, { side });
   }
@@ -73,7 +66,7 @@ function parseSide(text: string, range: Span, side: Side): EquationTerm[] {
  * equation.terms[3].side; // "right"
  */
 export function parseEquation(text: string): Equation {
-  if (trim(text, { start: 0, end: text.length }).start === text.length) {
+  if (trimRange(text, { start: 0, end: text.length }).start === text.length) {
     throw new ChemError('EQUATION_EMPTY', 'The equation is empty.', { start: 0, end: text.length });
   }
   const arrows = findArrows(text);

@@ -9,7 +9,7 @@ import { parseCount } from './count';
 import type { Formula, FormulaNode, FormulaUnit, Phase } from './formula';
 import { parseNodes } from './parse-nodes';
 import { parsePhase } from './phase';
-import { createScanner, isSpace, peek, scanError, skipSpaces, unexpectedHere, type Scanner } from './scanner';
+import { createScanner, peek, scanError, skipSpaces, trimRange, unexpectedHere, type Scanner } from './scanner';
 
 const HYDRATE_DOTS = new Set(['·', '•', '∙', '⋅', '*', '.']);
 const ELECTRONS = new Set(['e-', 'e−', 'e⁻', 'e^-', 'e^1-']);
@@ -22,13 +22,6 @@ export function isChargeAmbiguous(units: readonly FormulaUnit[]): boolean {
   if (units.length !== 1 || units[0].nodes.length !== 1) return false;
   const node = units[0].nodes[0];
   return node.kind === 'element' && node.count !== null;
-}
-
-function trimRange(text: string, range: Span): Span {
-  let { start, end } = range;
-  while (start < end && isSpace(text[start])) start += 1;
-  while (end > start && isSpace(text[end - 1])) end -= 1;
-  return { start, end };
 }
 
 function parseBody(scanner: Scanner): FormulaNode[] {

@@ -2,7 +2,7 @@
  * Character-level reading shared by the formula and equation parsers: a cursor over the text,
  * and the classes of characters (ASCII and Unicode sub/superscript digits, signs).
  */
-import { ChemError, type ChemErrorCode, type ChemErrorDetails } from '../errors/chem-error';
+import { ChemError, type ChemErrorCode, type ChemErrorDetails, type Span } from '../errors/chem-error';
 
 /** A cursor over one piece of text; `offset` moves error spans into the caller's string. */
 export interface Scanner {
@@ -101,4 +101,12 @@ export function isSpace(char: string): boolean {
 /** Moves the cursor past white space. */
 export function skipSpaces(scanner: Scanner): void {
   while (isSpace(peek(scanner))) scanner.pos += 1;
+}
+
+/** `range` of `text` without its leading and trailing white space (empty at its start if all space). */
+export function trimRange(text: string, range: Span): Span {
+  let { start, end } = range;
+  while (start < end && isSpace(text[start])) start += 1;
+  while (end > start && isSpace(text[end - 1])) end -= 1;
+  return { start, end };
 }
