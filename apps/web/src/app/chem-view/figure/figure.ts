@@ -10,8 +10,19 @@ import { Pipe, PipeTransform } from '@angular/core';
  */
 export function formatFigure(value: number | null | undefined, decimals = 3): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '–';
-  const text = new Intl.NumberFormat('en-GB', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }).format(value);
-  return text.replace('-', '−');
+  return formatterFor(decimals).format(value).replace('-', '−');
+}
+
+/** One formatter per decimals count: building an Intl.NumberFormat costs far more than using one. */
+const formatters = new Map<number, Intl.NumberFormat>();
+
+function formatterFor(decimals: number): Intl.NumberFormat {
+  let formatter = formatters.get(decimals);
+  if (!formatter) {
+    formatter = new Intl.NumberFormat('en-GB', { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
+    formatters.set(decimals, formatter);
+  }
+  return formatter;
 }
 
 /** Template form of {@link formatFigure}: `{{ budget.perKg | figure: 3 }}`. */
