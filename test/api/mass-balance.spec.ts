@@ -98,6 +98,28 @@ describe('mass-balance models', () => {
     expect(csv.text).toContain(',2,2');
   });
 
+  it('When a water changes only in notes, site or pH, then its models keep their result; a rename solves them again and the team export shows the new name', async () => {
+    const initial = await saveWater(app(), editor, teamId, mmolWater('Quiet initial', { Ca: '1', HCO3: '2' }));
+    const final = await saveWater(app(), editor, teamId, mmolWater('Quiet final', { Ca: '2', HCO3: '4' }));
+    const model = await saveModel({ name: 'Quiet model', initialWaterId: initial.id, finalWaterId: final.id, phases: [{ name: 'calcite', formula: 'CaCO3', rule: 'dissolve' }, { name: 'CO2', formula: 'CO2(g)' }], constraints: ['Ca', 'C'] });
+    const read = async () => (await request(app()).get(`/api/mass-balance-models/${model.id}`).set('Authorization', editor.auth).expect(200)).body as MassBalanceModel;
+
+    const edited = await request(app())
+      .patch(`/api/water-analyses/${final.id}`)
+      .set('Authorization', editor.auth)
+      .send({ version: final.version, notes: 'resampled', site: 'Pit 2', pH: 7.4, solutes: { HCO3: { value: '4', unit: 'mmol/L' }, Ca: { value: '2', unit: 'mmol/L' } } })
+      .expect(200);
+    const untouched = await read();
+    await request(app()).patch(`/api/water-analyses/${final.id}`).set('Authorization', editor.auth).send({ version: edited.body.version, name: 'Loud final' }).expect(200);
+    const renamed = await read();
+    const csv = await request(app()).get(`/api/teams/${teamId}/mass-balance-models/export.csv`).set('Authorization', editor.auth).expect(200);
+
+    expect([untouched.version, untouched.result.solvedAt]).toEqual([model.version, model.result.solvedAt]);
+    expect(renamed.result.final.name).toBe('Loud final');
+    expect(renamed.result.solvedAt).not.toBe(model.result.solvedAt);
+    expect(csv.text.split('\n').find((line) => line.startsWith('Quiet model,'))).toMatch(/^Quiet model,Quiet initial,Loud final,/);
+  });
+
   it('When a model names an unknown species or another team\'s water, then 400 with the path; a stale version gets 409', async () => {
     const other = await createTeam(app(), owner, 'Other team');
     const foreign = await saveWater(app(), owner, other, mmolWater('Foreign', { Ca: '1' }));

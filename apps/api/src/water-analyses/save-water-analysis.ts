@@ -11,7 +11,7 @@ import { Team } from '../teams/team.entity';
 import { computeWaterFigures, toStoredSolutes } from './convert-water';
 import { countModelUses } from './list-water-analyses';
 import { toWaterView } from './to-water-view';
-import { WaterAnalysis } from './water-analysis.entity';
+import { WaterAnalysis, type StoredSolute } from './water-analysis.entity';
 
 /** Who adds which analysis to which team. */
 export interface CreateWaterInput {
@@ -68,8 +68,8 @@ export async function createWaterAnalysis(em: EntityManager, input: CreateWaterI
 }
 
 /**
- * Changes a water analysis; the mass-balance models that use it are solved
- * again in the same transaction.
+ * Changes a water analysis; when its solutes or name changed, the mass-balance
+ * models that use it are solved again in the same transaction.
  *
  * @throws ConflictError VERSION_CONFLICT, WATER_ANALYSIS_DUPLICATE; ChemInputError
  */
@@ -84,10 +84,12 @@ export async function updateWaterAnalysis(em: EntityManager, input: { id: string
     const nextSolutes = solutes === undefined ? row.solutes : toStoredSolutes(solutes);
     const nextPh = pH === undefined ? (row.ph === null || row.ph === undefined ? null : Number(row.ph)) : pH;
     computeWaterFigures(nextSolutes, nextPh, settings);
+    // The solver reads only the solutes and the name (waterForSolver): other edits leave the models as solved.
+    const solverInputChanged = !sameSolutes(row.solutes, nextSolutes) || (fields.name !== undefined && fields.name !== row.name);
     Object.assign(row, Object.fromEntries(Object.entries(fields).filter(([, value]) => value !== undefined)), { solutes: nextSolutes, ph: nextPh });
     recordAudit(tx, { teamId, actorId: input.actorId, action: 'water_analysis.updated', entityType: 'water_analysis', entityId: row.id, summary: `Changed water analysis ${row.name}` });
     await tx.flush();
-    await resolveModelsOfWater(tx, row.id);
+    if (solverInputChanged) await resolveModelsOfWater(tx, row.id);
     return toWaterView(row, settings, await countModelUses(tx, row.id));
   });
 }
@@ -106,6 +108,12 @@ export async function deleteWaterAnalysis(em: EntityManager, id: string, actorId
     tx.remove(row);
     await tx.flush();
   });
+}
+
+/** Whether two stored solute maps hold the same values and units, whatever their key order (jsonb reorders keys). */
+function sameSolutes(a: Readonly<Record<string, StoredSolute>>, b: Readonly<Record<string, StoredSolute>>): boolean {
+  const keys = Object.keys(a);
+  return keys.length === Object.keys(b).length && keys.every((key) => b[key] !== undefined && a[key]!.value === b[key]!.value && a[key]!.unit === b[key]!.unit);
 }
 
 /** Which of these names the team's water analyses already use. */
