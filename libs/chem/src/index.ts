@@ -7,7 +7,7 @@
 export { Rational, gcdBig, lcmBig } from './rational/rational';
 
 // Errors and warnings
-export { ChemError, CHEM_ERROR_CODES, isChemError, spanAt } from './errors/chem-error';
+export { ChemError, CHEM_ERROR_CODES, isChemError } from './errors/chem-error';
 export type { ChemErrorCode, ChemErrorDetails, ChemIssue, Span } from './errors/chem-error';
 export { CHEM_WARNING_CODES } from './errors/chem-warning';
 export type { ChemWarning, ChemWarningCode } from './errors/chem-warning';
@@ -61,7 +61,6 @@ export type {
 // Conversions
 export {
   caco3KgPerTonne,
-  massFractions,
   molarMass,
   molarMassExact,
   molesPerKg,

@@ -43,21 +43,6 @@ export const CACO3_MOLAR_MASS = molarMassExact('CaCO3');
 export const CO2_MOLAR_MASS = molarMassExact('CO2');
 
 /**
- * Mass fraction of each element (0–1).
- * @example massFractions('CaCO3').get('Ca'); // ≈ 0.40044
- */
-export function massFractions(formula: Formula | string): Map<string, number> {
-  const parsed = toFormula(formula);
-  const total = molarMassExact(parsed);
-  const fractions = new Map<string, number>();
-  for (const [symbol, count] of parsed.composition) {
-    const element = findElement(symbol);
-    if (element !== undefined) fractions.set(symbol, element.atomicWeight.mul(count).div(total).toNumber());
-  }
-  return fractions;
-}
-
-/**
  * Moles of a species per kg of it (1000 / M).
  * @example molesPerKg('FeS2'); // ≈ 8.3358
  */

@@ -113,8 +113,3 @@ export class ChemError extends Error {
 export function isChemError(value: unknown): value is ChemError {
   return value instanceof ChemError;
 }
-
-/** A span from `start` of `length` characters. */
-export function spanAt(start: number, length: number): Span {
-  return { start, end: start + length };
-}
