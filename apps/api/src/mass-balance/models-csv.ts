@@ -20,15 +20,19 @@ export function solutionsCsv(model: MassBalanceModel): string {
   return writeCsv([...MASS_BALANCE_MODELS_CSV_COLUMNS, ...phases.map((name) => `transfer:${name}`)], rows);
 }
 
-/** Every model of a team: definition, status and the first (best) solution. */
-export function modelListCsv(models: readonly MassBalanceModel[], waterNames: ReadonlyMap<string, string>): string {
+/**
+ * Every model of a team: definition, status and the first (best) solution. The
+ * water names are those stored with the result ('pure water' for none): a
+ * rename of a water solves its models again, so they are current.
+ */
+export function modelListCsv(models: readonly MassBalanceModel[]): string {
   const header = ['name', 'initial_water', 'final_water', 'phases', 'constraints', 'uncertainty_percent', 'status', 'model_count', 'valid_model_count', 'first_model_transfers_mmol_kg', 'first_model_implied_reaction'];
   const rows = models.map((model) => {
     const first = model.result.models[0];
     return [
       model.name,
-      model.initialWaterId ? (waterNames.get(model.initialWaterId) ?? model.initialWaterId) : 'pure water',
-      waterNames.get(model.finalWaterId) ?? model.finalWaterId,
+      model.result.initial.name,
+      model.result.final.name,
       model.phases.map((phase) => `${phase.name} [${phase.equation ?? phase.formula ?? ''}; ${phase.rule}]`).join(' | '),
       model.constraints.join(' '),
       Object.entries(model.uncertainty).map(([key, value]) => `${key}=${value}`).join(' '),

@@ -7,7 +7,6 @@ import { SITE_RECORD_KINDS } from '../site-data/record-kinds';
 import { downloadName } from '../site-data/upload';
 import { requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
-import { WaterAnalysis } from '../water-analyses/water-analysis.entity';
 import { MassBalanceModel } from './mass-balance-model.entity';
 import { modelListCsv, solutionsCsv } from './models-csv';
 import { createMassBalanceModel, deleteMassBalanceModel, resolveMassBalanceModel, updateMassBalanceModel } from './save-mass-balance-model';
@@ -36,8 +35,7 @@ export function massBalanceRoutes(em: EntityManager, requireUser: RequestHandler
   router.get(`${base}/export.csv`, requireUser, requireTeamRole(em, 'viewer'), async (_req, res) => {
     const team = currentMembership(res).team;
     const models = (await em.find(MassBalanceModel, { team: team.id }, { orderBy: { name: 'asc' } })).map(toModelView);
-    const waters = await em.find(WaterAnalysis, { team: team.id }, { fields: ['name'] });
-    const csv = modelListCsv(models, new Map(waters.map((water) => [water.id, water.name])));
+    const csv = modelListCsv(models);
     res.attachment(downloadName(`${team.getEntity().name}-mass-balance-models`, 'csv')).type('text/csv; charset=utf-8').send(csv);
   });
 
