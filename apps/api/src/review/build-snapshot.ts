@@ -1,9 +1,8 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { isChemError, parseEquation, parseFormula, speciesKey } from '@tallus/chem';
 import type { ReactionSetDetail, SnapshotSpecies } from '@tallus/contracts';
-import { BUILTIN_SPECIES } from '../species/builtin-species';
 import { Species } from '../species/species.entity';
-import { toBuiltinSpeciesView, toSpeciesView } from '../species/to-species-view';
+import { BUILTIN_SPECIES_VIEWS, toSpeciesView } from '../species/to-species-view';
 import type { RevisionSnapshot } from './revision.entity';
 
 /**
@@ -20,7 +19,7 @@ export async function buildSnapshot(tx: EntityManager, detail: ReactionSetDetail
   const teamSpecies = await tx.find(Species, { team: detail.teamId }, { orderBy: { name: 'asc' } });
   const species: SnapshotSpecies[] = [];
   const seen = new Set<string>();
-  const candidates = [...teamSpecies.map(toSpeciesView), ...BUILTIN_SPECIES.map(toBuiltinSpeciesView)];
+  const candidates = [...teamSpecies.map(toSpeciesView), ...BUILTIN_SPECIES_VIEWS];
   for (const candidate of candidates) {
     const key = speciesKey(parseFormula(candidate.formula));
     if (!used.has(key) || seen.has(key)) continue;

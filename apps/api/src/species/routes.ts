@@ -5,10 +5,9 @@ import { currentMembership, currentRecordId, currentUserId } from '../http/local
 import { parseBody } from '../http/validate';
 import { RECORD_KINDS, requireRecordRole } from '../teams/require-record-role';
 import { requireTeamRole } from '../teams/require-team-role';
-import { BUILTIN_SPECIES } from './builtin-species';
 import { Species } from './species.entity';
 import { createSpecies, deleteSpecies, updateSpecies } from './save-species';
-import { toBuiltinSpeciesView, toSpeciesView } from './to-species-view';
+import { BUILTIN_SPECIES_VIEWS, toSpeciesView } from './to-species-view';
 
 /**
  * The species catalogue: `GET /api/species/builtin` (any signed-in user),
@@ -20,7 +19,7 @@ export function speciesRoutes(em: EntityManager, requireUser: RequestHandler): R
   const kind = RECORD_KINDS.species;
 
   router.get('/species/builtin', requireUser, (_req, res) => {
-    res.json(BUILTIN_SPECIES.map(toBuiltinSpeciesView));
+    res.json(BUILTIN_SPECIES_VIEWS);
   });
 
   router.get('/teams/:teamId/species', requireUser, requireTeamRole(em, 'viewer'), async (_req, res) => {

@@ -1,6 +1,6 @@
 import { massToJson } from '@tallus/chem';
 import type { Species as SpeciesView } from '@tallus/contracts';
-import type { BuiltinSpecies } from './builtin-species';
+import { BUILTIN_SPECIES, type BuiltinSpecies } from './builtin-species';
 import type { Species } from './species.entity';
 
 /** A team species as responses show it. */
@@ -24,24 +24,30 @@ export function toSpeciesView(species: Species): SpeciesView {
   };
 }
 
-/** A species of the built-in catalogue as responses show it: id `builtin:<key>`, mass and composition computed from the formula. */
-export function toBuiltinSpeciesView(species: BuiltinSpecies): SpeciesView {
+/**
+ * The built-in catalogue as responses show it (id `builtin:<key>`, mass and composition
+ * computed from the formula), computed once: the catalogue is a constant. Frozen, as
+ * every request shares it.
+ */
+export const BUILTIN_SPECIES_VIEWS: readonly SpeciesView[] = Object.freeze(BUILTIN_SPECIES.map(toBuiltinSpeciesView));
+
+function toBuiltinSpeciesView(species: BuiltinSpecies): SpeciesView {
   const mass = massToJson(species.formula);
-  return {
+  return Object.freeze({
     id: `builtin:${species.key}`,
     teamId: null,
     isBuiltin: true,
     name: species.name,
     formula: species.formula,
     phase: species.phase,
-    oxidationStates: species.oxidationStates ? { ...species.oxidationStates } : null,
+    oxidationStates: species.oxidationStates ? Object.freeze({ ...species.oxidationStates }) : null,
     notes: species.notes ?? '',
     source: species.source,
     molarMass: mass.molarMass,
-    composition: mass.composition,
+    composition: Object.freeze(mass.composition),
     charge: mass.charge,
     version: 0,
     createdAt: null,
     updatedAt: null,
-  };
+  });
 }
