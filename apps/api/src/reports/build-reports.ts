@@ -68,10 +68,10 @@ export async function buildSiteReport(em: EntityManager, teamId: string, site: s
   const setRows = await em.find(ReactionSet, { team: teamId, ...(filter === undefined ? {} : { site: filter }) }, { orderBy: { name: 'asc' }, fields: ['id'] });
   const sets: ReactionSetDetail[] = [];
   for (const row of setRows) sets.push(await getReactionSet(em, row.id));
-  const waters = await listWaterAnalyses(em, teamId, filter);
+  const waters = await listWaterAnalyses(em, teamId, filter, settings);
   const waterIds = new Set(waters.map((water) => water.id));
   const models = (await em.find(MassBalanceModel, { team: teamId }, { orderBy: { name: 'asc' } })).map(toModelView).filter((model) => filter === undefined || waterIds.has(model.finalWaterId));
-  const samples = await listRockSamples(em, teamId, filter);
+  const samples = await listRockSamples(em, teamId, filter, settings);
   const body: PdfContent[] = [
     { text: 'Reaction sets', style: 'h2' },
     ...(sets.length === 0 ? [{ text: 'No reaction sets for this site.', style: 'small' }] : sets.flatMap((set) => reactionSetSection(set))),

@@ -26,8 +26,8 @@ export async function importRockCsv(em: EntityManager, input: { teamId: string; 
   const preview = await previewRockCsv(em, input.teamId, input.file);
   const { requests, skippedLines } = rowsToImport(preview, input.skipInvalid);
   return em.transactional(async (tx) => {
-    const rows = await addRockSamples(tx, { teamId: input.teamId, actorId: input.actorId, requests, action: 'rock_sample.imported' });
     const settings = await loadTeamSettings(tx, input.teamId);
+    const rows = await addRockSamples(tx, { teamId: input.teamId, actorId: input.actorId, requests, action: 'rock_sample.imported', settings });
     return { created: rows.map((row) => toRockView(row, settings)), skippedLines };
   });
 }

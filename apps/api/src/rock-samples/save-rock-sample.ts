@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { ref } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { CreateRockSampleRequest, RockSample as RockSampleView, UpdateRockSampleRequest } from '@tallus/contracts';
+import type { CreateRockSampleRequest, RockSample as RockSampleView, TeamSettingsValues, UpdateRockSampleRequest } from '@tallus/contracts';
 import { recordAudit } from '../audit/record-audit';
 import { assertVersion } from '../db/assert-version';
 import { ConflictError } from '../errors/app-errors';
@@ -16,10 +16,14 @@ import { rockInputsOf, toRockView } from './to-rock-view';
  * modes and oxides with libs/chem and the names for duplicates. Used by create
  * (one) and the CSV import (many).
  *
+ * @param input.settings the team's settings when the caller already has them (else loaded)
  * @throws ChemInputError at `modes.<i>.formula` or `oxides.<key>`; ConflictError ROCK_SAMPLE_DUPLICATE
  */
-export async function addRockSamples(tx: EntityManager, input: { teamId: string; actorId: string; requests: CreateRockSampleRequest[]; action: string }): Promise<RockSample[]> {
-  const settings = await loadTeamSettings(tx, input.teamId);
+export async function addRockSamples(
+  tx: EntityManager,
+  input: { teamId: string; actorId: string; requests: CreateRockSampleRequest[]; action: string; settings?: TeamSettingsValues },
+): Promise<RockSample[]> {
+  const settings = input.settings ?? (await loadTeamSettings(tx, input.teamId));
   // One query for the whole batch; names added earlier in the batch join the set as they go.
   const taken = await takenNames(tx, input.teamId, input.requests.map((request) => request.name));
   const rows = [];
@@ -39,8 +43,9 @@ export async function addRockSamples(tx: EntityManager, input: { teamId: string;
 /** Adds one rock sample. */
 export async function createRockSample(em: EntityManager, input: { teamId: string; actorId: string; request: CreateRockSampleRequest }): Promise<RockSampleView> {
   return em.transactional(async (tx) => {
-    const [row] = await addRockSamples(tx, { teamId: input.teamId, actorId: input.actorId, requests: [input.request], action: 'rock_sample.created' });
-    return toRockView(row, await loadTeamSettings(tx, input.teamId));
+    const settings = await loadTeamSettings(tx, input.teamId);
+    const [row] = await addRockSamples(tx, { teamId: input.teamId, actorId: input.actorId, requests: [input.request], action: 'rock_sample.created', settings });
+    return toRockView(row, settings);
   });
 }
 

@@ -26,8 +26,8 @@ export async function importWaterCsv(em: EntityManager, input: { teamId: string;
   const preview = await previewWaterCsv(em, input.teamId, input.file);
   const { requests, skippedLines } = rowsToImport(preview, input.skipInvalid);
   return em.transactional(async (tx) => {
-    const rows = await addWaterAnalyses(tx, { teamId: input.teamId, actorId: input.actorId, requests, action: 'water_analysis.imported' });
     const settings = await loadTeamSettings(tx, input.teamId);
+    const rows = await addWaterAnalyses(tx, { teamId: input.teamId, actorId: input.actorId, requests, action: 'water_analysis.imported', settings });
     return { created: rows.map((row) => toWaterView(row, settings, 0)), skippedLines };
   });
 }

@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { WaterAnalysis as WaterAnalysisView } from '@tallus/contracts';
+import type { TeamSettingsValues, WaterAnalysis as WaterAnalysisView } from '@tallus/contracts';
 import { loadTeamSettings } from '../team-settings/load-team-settings';
 import { toWaterView } from './to-water-view';
 import { WaterAnalysis } from './water-analysis.entity';
@@ -20,12 +20,16 @@ async function usesByWater(em: EntityManager, teamId: string): Promise<Map<strin
   return new Map(rows.map((row) => [row.water_id, Number(row.count)]));
 }
 
-/** The team's water analyses (optionally of one site), by site, date and name, with their figures. */
-export async function listWaterAnalyses(em: EntityManager, teamId: string, site?: string): Promise<WaterAnalysisView[]> {
+/**
+ * The team's water analyses (optionally of one site), by site, date and name, with their figures.
+ *
+ * @param settings the team's settings when the caller already has them (else loaded)
+ */
+export async function listWaterAnalyses(em: EntityManager, teamId: string, site?: string, settings?: TeamSettingsValues): Promise<WaterAnalysisView[]> {
   const rows = await em.find(WaterAnalysis, { team: teamId, ...(site === undefined ? {} : { site }) }, { orderBy: { site: 'asc', sampledOn: 'asc', name: 'asc' } });
-  const settings = await loadTeamSettings(em, teamId);
+  const teamSettings = settings ?? (await loadTeamSettings(em, teamId));
   const uses = await usesByWater(em, teamId);
-  return rows.map((row) => toWaterView(row, settings, uses.get(row.id) ?? 0));
+  return rows.map((row) => toWaterView(row, teamSettings, uses.get(row.id) ?? 0));
 }
 
 /** One water analysis with its figures. */

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { ref } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
-import type { CreateWaterAnalysisRequest, UpdateWaterAnalysisRequest, WaterAnalysis as WaterAnalysisView } from '@tallus/contracts';
+import type { CreateWaterAnalysisRequest, TeamSettingsValues, UpdateWaterAnalysisRequest, WaterAnalysis as WaterAnalysisView } from '@tallus/contracts';
 import { recordAudit } from '../audit/record-audit';
 import { assertVersion } from '../db/assert-version';
 import { ConflictError } from '../errors/app-errors';
@@ -25,10 +25,14 @@ export interface CreateWaterInput {
  * every solute, unit and value with libs/chem and the names for duplicates.
  * Used by create (one) and the CSV import (many).
  *
+ * @param input.settings the team's settings when the caller already has them (else loaded)
  * @throws ChemInputError at `solutes.<key>.…`; ConflictError WATER_ANALYSIS_DUPLICATE
  */
-export async function addWaterAnalyses(tx: EntityManager, input: { teamId: string; actorId: string; requests: CreateWaterAnalysisRequest[]; action: string }): Promise<WaterAnalysis[]> {
-  const settings = await loadTeamSettings(tx, input.teamId);
+export async function addWaterAnalyses(
+  tx: EntityManager,
+  input: { teamId: string; actorId: string; requests: CreateWaterAnalysisRequest[]; action: string; settings?: TeamSettingsValues },
+): Promise<WaterAnalysis[]> {
+  const settings = input.settings ?? (await loadTeamSettings(tx, input.teamId));
   // One query for the whole batch; names added earlier in the batch join the set as they go.
   const taken = await takenNames(tx, input.teamId, input.requests.map((request) => request.name));
   const rows = [];
@@ -62,8 +66,9 @@ export async function addWaterAnalyses(tx: EntityManager, input: { teamId: strin
  */
 export async function createWaterAnalysis(em: EntityManager, input: CreateWaterInput): Promise<WaterAnalysisView> {
   return em.transactional(async (tx) => {
-    const [row] = await addWaterAnalyses(tx, { teamId: input.teamId, actorId: input.actorId, requests: [input.request], action: 'water_analysis.created' });
-    return toWaterView(row, await loadTeamSettings(tx, input.teamId), 0);
+    const settings = await loadTeamSettings(tx, input.teamId);
+    const [row] = await addWaterAnalyses(tx, { teamId: input.teamId, actorId: input.actorId, requests: [input.request], action: 'water_analysis.created', settings });
+    return toWaterView(row, settings, 0);
   });
 }
 
