@@ -1,7 +1,7 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import type { Problem } from '@tallus/contracts';
 
-import { describeProblem, describeValidationErrors } from './error-messages';
+import { describeProblem, describeValidationErrors, errorText } from './error-messages';
 import { toProblem } from './problem';
 
 const problem = (code: Problem['code'], detail: string): Problem => ({
@@ -37,6 +37,16 @@ describe('describeProblem', () => {
     const offline = toProblem(new HttpErrorResponse({ status: 0, error: new ProgressEvent('error') }));
 
     expect(describeProblem(offline)).toContain('could not reach its server');
+  });
+});
+
+describe('errorText', () => {
+  it('gives no text when nothing failed', () => {
+    expect(errorText(undefined)).toBeNull();
+  });
+
+  it('describes what a failed call threw', () => {
+    expect(errorText(new HttpErrorResponse({ status: 0, error: new ProgressEvent('error') }))).toContain('could not reach its server');
   });
 });
 

@@ -1,6 +1,8 @@
 import { ValidationErrors } from '@angular/forms';
 import type { Problem, ProblemIssue } from '@tallus/contracts';
 
+import { toProblem } from './problem';
+
 /**
  * Screen texts for error codes, in one place. Problems from the API bring their own
  * English `detail`; these texts replace it where the screen can say more about what to do.
@@ -67,6 +69,15 @@ function boundOf(details: unknown, key: 'min' | 'max'): string {
  */
 export function describeProblem(problem: Problem): string {
   return messagesByCode[problem.code] ?? (problem.detail || problem.title);
+}
+
+/**
+ * The text for whatever a failed call threw, e.g. a resource's `error()`; null when nothing failed.
+ *
+ * @param error the error, or undefined/null when there is none
+ */
+export function errorText(error: unknown): string | null {
+  return error ? describeProblem(toProblem(error)) : null;
 }
 
 /**

@@ -14,7 +14,7 @@ import { BalanceStatus } from '../../chem-view/balance-status/balance-status';
 import { EquationView } from '../../chem-view/equation-view/equation-view';
 import { Fraction } from '../../chem-view/fraction/fraction';
 import { FormulaText } from '../../chem-view/formula-text/formula-text';
-import { describeProblem } from '../../core/error-messages';
+import { errorText } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { hasRoleAtLeast } from '../../teams/roles';
@@ -51,10 +51,7 @@ export class LibraryPage {
     const chosen = this.targetTeamId() ?? this.teamId();
     return this.writableTeams().find((team) => team.id === chosen) ?? this.writableTeams()[0] ?? null;
   });
-  protected readonly listError = computed(() => {
-    const error = this.publications.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly listError = computed(() => errorText(this.publications.error()));
 
   protected select(id: string): void {
     this.selectedId.set(id);

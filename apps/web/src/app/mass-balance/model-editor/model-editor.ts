@@ -13,7 +13,7 @@ import { Router, RouterLink } from '@angular/router';
 import type { MassBalanceModel } from '@tallus/contracts';
 import { forkJoin, map, startWith } from 'rxjs';
 
-import { describeProblem, describeValidationErrors } from '../../core/error-messages';
+import { describeValidationErrors, errorText } from '../../core/error-messages';
 import { showProblemAtFields } from '../../core/form-problems';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
@@ -68,10 +68,7 @@ export class ModelEditor {
     // The controls are added quietly (no valueChanges), so creating them here writes no signal.
     solutesOf(this.value(), this.waters.value() ?? []).map((solute) => ({ solute, control: soluteControl(this.form, solute) })),
   );
-  protected readonly loadError = computed(() => {
-    const error = this.model.error() ?? this.waters.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly loadError = computed(() => errorText(this.model.error() ?? this.waters.error()));
 
   constructor() {
     effect(() => {

@@ -6,8 +6,7 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import type { MassBalanceModel } from '@tallus/contracts';
 
-import { describeProblem } from '../../core/error-messages';
-import { toProblem } from '../../core/problem';
+import { errorText } from '../../core/error-messages';
 import { TeamStore } from '../../teams/team-store';
 import { MassBalanceApi } from '../mass-balance-api';
 
@@ -27,10 +26,7 @@ export class ModelList {
 
   protected readonly models = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
   protected readonly canWrite = this.teamStore.canWrite;
-  protected readonly loadError = computed(() => {
-    const error = this.models.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly loadError = computed(() => errorText(this.models.error()));
 
   protected summary(model: MassBalanceModel): { label: string; icon: string; tone: string } {
     const valid = model.result.models.filter((entry) => entry.valid).length;

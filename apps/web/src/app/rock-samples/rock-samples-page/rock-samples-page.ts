@@ -9,7 +9,7 @@ import { ABA_NOTES } from '@tallus/chem';
 import type { RockSample } from '@tallus/contracts';
 
 import { FigurePipe } from '../../chem-view/figure/figure';
-import { describeProblem } from '../../core/error-messages';
+import { errorText } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
 import { ReportButton } from '../../reports/report-button/report-button';
@@ -68,10 +68,7 @@ export class RockSamplesPage {
   protected readonly totalSulfurCount = computed(() => (this.samples.value() ?? []).filter((sample) => sample.aba?.sulfurBasis === 'total').length);
   protected readonly canWrite = this.teamStore.canWrite;
   protected readonly isOwner = this.teamStore.isOwner;
-  protected readonly loadError = computed(() => {
-    const error = this.samples.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly loadError = computed(() => errorText(this.samples.error()));
   protected readonly abaNotes = [ABA_NOTES.SCREENING_ONLY];
   protected readonly flagWords = FLAG_WORDS;
 

@@ -13,9 +13,8 @@ import { MatTooltipModule } from '@angular/material/tooltip';
 import type { Species } from '@tallus/contracts';
 import { forkJoin, map } from 'rxjs';
 
-import { describeProblem } from '../../core/error-messages';
+import { errorText } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
-import { toProblem } from '../../core/problem';
 import { TeamStore } from '../../teams/team-store';
 import { SpeciesApi } from '../species-api';
 import { formatOxidationStates } from '../species-dialog/oxidation-states-text';
@@ -62,10 +61,7 @@ export class SpeciesCatalogue {
       forkJoin([this.api.listTeamSpecies(teamId), this.api.listBuiltin()]).pipe(map(([own, builtin]) => [...own, ...builtin])),
   });
   protected readonly ownCount = computed(() => (this.species.hasValue() ? this.species.value().filter((entry) => !entry.isBuiltin).length : 0));
-  protected readonly loadError = computed(() => {
-    const error = this.species.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly loadError = computed(() => errorText(this.species.error()));
 
   constructor() {
     this.dataSource.filterPredicate = (entry, filter) =>

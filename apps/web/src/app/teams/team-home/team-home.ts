@@ -8,9 +8,8 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 import type { ReactionSetDetail } from '@tallus/contracts';
 
-import { describeProblem } from '../../core/error-messages';
+import { errorText } from '../../core/error-messages';
 import { Notifier } from '../../core/notifier';
-import { toProblem } from '../../core/problem';
 import { ImportDialog } from '../../reaction-sets/import-dialog/import-dialog';
 import { NewSetDialog } from '../../reaction-sets/new-set-dialog/new-set-dialog';
 import { ReactionSetsApi } from '../../reaction-sets/reaction-sets-api';
@@ -54,14 +53,8 @@ export class TeamHome {
   protected readonly reviewQueue = computed(() =>
     this.sets.hasValue() ? this.sets.value().filter((set) => set.reviewState === 'in_review') : [],
   );
-  protected readonly setsError = computed(() => {
-    const error = this.sets.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
-  protected readonly activityError = computed(() => {
-    const error = this.activity.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly setsError = computed(() => errorText(this.sets.error()));
+  protected readonly activityError = computed(() => errorText(this.activity.error()));
 
   protected openNewSet(): void {
     this.dialog

@@ -14,7 +14,7 @@ import type { WaterAnalysis } from '@tallus/contracts';
 import { debounceTime, map, startWith } from 'rxjs';
 
 import { FigurePipe } from '../../chem-view/figure/figure';
-import { describeProblem, describeValidationErrors } from '../../core/error-messages';
+import { describeValidationErrors, errorText } from '../../core/error-messages';
 import { showProblemAtFields } from '../../core/form-problems';
 import { Notifier } from '../../core/notifier';
 import { toProblem } from '../../core/problem';
@@ -78,10 +78,7 @@ export class WaterEditor {
     const balance = this.live().balance;
     return balance ? cbeView(balance) : null;
   });
-  protected readonly loadError = computed(() => {
-    const error = this.analysis.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly loadError = computed(() => errorText(this.analysis.error()));
 
   constructor() {
     effect(() => {

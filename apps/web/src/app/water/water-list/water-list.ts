@@ -8,8 +8,7 @@ import { RouterLink } from '@angular/router';
 import type { WaterAnalysis } from '@tallus/contracts';
 
 import { FigurePipe } from '../../chem-view/figure/figure';
-import { describeProblem } from '../../core/error-messages';
-import { toProblem } from '../../core/problem';
+import { errorText } from '../../core/error-messages';
 import { CsvTransfer, type CsvRecordsKind } from '../../site-data/csv-transfer';
 import { TeamStore } from '../../teams/team-store';
 import { CBE_NOTE_WORDS, cbeView } from '../cbe-view';
@@ -41,10 +40,7 @@ export class WaterList {
 
   protected readonly analyses = rxResource({ params: () => this.teamId(), stream: ({ params: teamId }) => this.api.list(teamId) });
   protected readonly canWrite = this.teamStore.canWrite;
-  protected readonly loadError = computed(() => {
-    const error = this.analyses.error();
-    return error ? describeProblem(toProblem(error)) : null;
-  });
+  protected readonly loadError = computed(() => errorText(this.analyses.error()));
   /** Threshold and convention the server applied (the team's settings). */
   protected readonly rule = computed(() => {
     const first = this.analyses.value()?.[0]?.chargeBalance;
