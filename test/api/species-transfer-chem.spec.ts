@@ -53,6 +53,13 @@ describe('Species catalogue', () => {
     expect(response.body.issues[0]).toMatchObject({ code, path: ['formula'], span: { start: expect.any(Number), end: expect.any(Number) } });
   });
 
+  it('When a species is given oxidation states that do not add up to its charge, then the answer is 422 OXIDATION_BAD_STATE at path oxidationStates', async () => {
+    const response = await send('post', `/api/teams/${teamId}/species`, { name: 'Odd pyrite', formula: 'FeS2', phase: 'mineral', oxidationStates: { Fe: '3', S: '-1' } });
+
+    expect(response.status).toBe(422);
+    expect(response.body.issues[0]).toMatchObject({ code: 'OXIDATION_BAD_STATE', path: ['oxidationStates'] });
+  });
+
   it('When the built-in catalogue is read, then it has at least 40 species, each with a source and a computed molar mass', async () => {
     const builtin = (await send('get', '/api/species/builtin').expect(200)).body as Array<{ formula: string; source: string; molarMass: number; isBuiltin: boolean }>;
 

@@ -5,7 +5,6 @@ import {
   checkToJson,
   combineReactions,
   combineToJson,
-  isChemError,
   massToJson,
   formulaText,
   mineralCo2Uptake,
@@ -22,7 +21,6 @@ import {
   chemOxidesRequestSchema,
 } from '@tallus/contracts';
 import { Router, type RequestHandler } from 'express';
-import { ChemInputError } from '../errors/app-errors';
 import { withChemPath } from '../site-data/chem-path';
 import { parseBody } from '../http/validate';
 import { createChemRateLimit } from './chem-rate-limit';
@@ -51,7 +49,7 @@ export function chemRoutes(requireUser: RequestHandler, ratePerMinute: number): 
 
   router.post('/formula', (req, res) => {
     const { formula } = parseBody(chemFormulaRequestSchema, req.body);
-    res.json(massOrInputError(formula));
+    res.json(withChemPath(['formula'], () => massToJson(formula)));
   });
 
   router.post('/combine', (req, res) => {
@@ -76,14 +74,4 @@ export function chemRoutes(requireUser: RequestHandler, ratePerMinute: number): 
   });
 
   return router;
-}
-
-function massOrInputError(formula: string): ReturnType<typeof massToJson> {
-  try {
-    return massToJson(formula);
-  } catch (error) {
-    // The engine's error is about the request's `formula` field: give it that path (422 with span).
-    if (isChemError(error)) throw new ChemInputError(['formula'], error);
-    throw error;
-  }
 }

@@ -1,6 +1,6 @@
-import { assignOxidationStates, isChemError, massToJson, parseFormula, phasedSpeciesKey, Rational } from '@tallus/chem';
+import { assignOxidationStates, massToJson, parseFormula, phasedSpeciesKey, Rational } from '@tallus/chem';
 import type { SpeciesOxidationStates } from '@tallus/contracts';
-import { ChemInputError } from '../errors/app-errors';
+import { withChemPath } from '../site-data/chem-path';
 
 /** What the server derives from a species' formula. */
 export interface SpeciesFields {
@@ -22,21 +22,11 @@ export interface SpeciesFields {
  * @throws ChemInputError at path `formula` (FORMULA_* with span) or `oxidationStates` (OXIDATION_*)
  */
 export function computeSpeciesFields(formula: string, oxidationStates: SpeciesOxidationStates | null): SpeciesFields {
-  const parsed = withPath(['formula'], () => parseFormula(formula));
+  const parsed = withChemPath(['formula'], () => parseFormula(formula));
   if (oxidationStates) {
     const states = new Map(Object.entries(oxidationStates).map(([symbol, value]): [string, Rational] => [symbol, Rational.parse(value)]));
-    withPath(['oxidationStates'], () => assignOxidationStates(parsed, states));
+    withChemPath(['oxidationStates'], () => assignOxidationStates(parsed, states));
   }
   const mass = massToJson(parsed);
   return { formula, molarMass: mass.molarMass, composition: mass.composition, charge: mass.charge, formulaKey: phasedSpeciesKey(parsed) };
-}
-
-function withPath<T>(path: string[], run: () => T): T {
-  try {
-    return run();
-  } catch (error) {
-    // A ChemError is about the user's text: it gets the request path; anything else is a bug and propagates as is.
-    if (isChemError(error)) throw new ChemInputError(path, error);
-    throw error;
-  }
 }
