@@ -1,4 +1,4 @@
-import { findSolute, isChemError, parseConcentration, toMillimolesPerLitre } from '@tallus/chem';
+import { findSolute, isChemError, parseConcentration, SOLUTES, toMillimolesPerLitre } from '@tallus/chem';
 import { createWaterAnalysisRequestSchema, WATER_CSV_FIXED_COLUMNS, type CreateWaterAnalysisRequest, type CsvColumn, type CsvIssue, type WaterAnalysis } from '@tallus/contracts';
 import type { CsvLayout, RowReading } from '../site-data/csv-preview';
 import { isCsvIssue, readNumberCell, writeCsv } from '../site-data/csv-table';
@@ -17,6 +17,9 @@ const FIELD_OF: Record<(typeof WATER_CSV_FIXED_COLUMNS)[number], keyof CreateWat
 const COMPUTED_COLUMNS = ['computed:cations_meq_l', 'computed:anions_meq_l', 'computed:cbe_percent', 'computed:cbe_flagged', 'computed:notes'] as const;
 
 const SOLUTE_HEADER = /^(\S+)\s*\((.+)\)$/;
+
+/** Place of each solute key in the export's columns: the libs/chem catalogue order (cations, anions, neutral). */
+const SOLUTE_ORDER: ReadonlyMap<string, number> = new Map(SOLUTES.map((solute, index) => [solute.key, index]));
 
 function readHeader(header: string, index: number): { column: CsvColumn; issue?: CsvIssue } {
   const fixed = WATER_CSV_FIXED_COLUMNS.find((name) => name === header.toLowerCase());
@@ -114,11 +117,7 @@ function round(value: number | null, digits = 4): number | null {
 /** Analyses as CSV in the import layout, with the computed charge balance after the solutes. */
 export function waterAnalysesCsv(analyses: readonly WaterAnalysis[]): string {
   const soluteColumns = [...new Set(analyses.flatMap((analysis) => Object.entries(analysis.solutes).map(([key, entry]) => `${key} (${entry.unit})`)))];
-  const order = (header: string) => {
-    const key = SOLUTE_HEADER.exec(header)?.[1] ?? '';
-    const index = ['Ca', 'Mg', 'Na', 'K', 'Fe', 'Fe3', 'Mn', 'Al', 'Sr', 'Ba', 'Zn', 'Cu', 'Ni', 'NH4', 'Cl', 'SO4', 'NO3', 'F', 'Br', 'HCO3', 'CO3', 'alkalinity', 'SiO2', 'Si', 'DIC'].indexOf(key);
-    return index === -1 ? 99 : index;
-  };
+  const order = (header: string) => SOLUTE_ORDER.get(SOLUTE_HEADER.exec(header)?.[1] ?? '') ?? SOLUTE_ORDER.size;
   soluteColumns.sort((a, b) => order(a) - order(b) || a.localeCompare(b));
   const rows = analyses.map((analysis) => [
     analysis.name,
