@@ -8,6 +8,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
+import type { RevisionSummary } from '@tallus/contracts';
 import { Observable } from 'rxjs';
 
 import { AuthStore } from '../../auth/auth-store';
@@ -66,7 +67,7 @@ export class ReviewPanel {
   protected readonly canDecide = computed(() => this.set()?.reviewState === 'in_review' && this.teamStore.isReviewer());
   /** Vetted revisions, newest first (as the API sends them; sorted again, as cheap insurance). */
   protected readonly revisions = computed(() => [...(this.set()?.revisions ?? [])].sort((a, b) => b.number - a.number));
-  protected readonly latestRevision = computed(() => this.revisions()[0] ?? null);
+  protected readonly latestRevision = computed((): RevisionSummary | null => this.revisions()[0] ?? null);
   protected readonly canPublish = computed(
     () => this.set()?.reviewState === 'vetted' && this.isOwner() && this.latestRevision()?.publicationId === null,
   );
