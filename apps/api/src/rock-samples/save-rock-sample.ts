@@ -5,6 +5,7 @@ import type { CreateRockSampleRequest, RockSample as RockSampleView, TeamSetting
 import { recordAudit } from '../audit/record-audit';
 import { assertVersion } from '../db/assert-version';
 import { ConflictError } from '../errors/app-errors';
+import { takenNames } from '../site-data/taken-names';
 import { loadTeamSettings } from '../team-settings/load-team-settings';
 import { Team } from '../teams/team.entity';
 import { computeRockFigures } from './compute-rock-figures';
@@ -25,7 +26,7 @@ export async function addRockSamples(
 ): Promise<RockSample[]> {
   const settings = input.settings ?? (await loadTeamSettings(tx, input.teamId));
   // One query for the whole batch; names added earlier in the batch join the set as they go.
-  const taken = await takenNames(tx, input.teamId, input.requests.map((request) => request.name));
+  const taken = await takenNames(tx, 'rock_samples', input.teamId, input.requests.map((request) => request.name));
   const rows = [];
   for (const request of input.requests) {
     const { name, site, lithology, notes, ...measured } = request;
@@ -60,7 +61,7 @@ export async function updateRockSample(em: EntityManager, input: { id: string; a
     const row = await tx.findOneOrFail(RockSample, input.id, { refresh: true });
     assertVersion(row.version, version);
     const teamId = row.team.id;
-    if (changes.name !== undefined && changes.name !== row.name && (await takenNames(tx, teamId, [changes.name])).size > 0) throw duplicateName(changes.name);
+    if (changes.name !== undefined && changes.name !== row.name && (await takenNames(tx, 'rock_samples', teamId, [changes.name])).size > 0) throw duplicateName(changes.name);
     const defined = Object.fromEntries(Object.entries(changes).filter(([, value]) => value !== undefined));
     const settings = await loadTeamSettings(tx, teamId);
     computeRockFigures({ ...rockInputsOf(row), ...defined }, settings);
@@ -81,12 +82,6 @@ export async function deleteRockSample(em: EntityManager, id: string, actorId: s
   });
 }
 
-/** Which of these names the team's rock samples already use. */
-async function takenNames(em: EntityManager, teamId: string, names: readonly string[]): Promise<Set<string>> {
-  if (names.length === 0) return new Set();
-  const rows = await em.find(RockSample, { team: teamId, name: { $in: [...new Set(names)] } }, { fields: ['name'] });
-  return new Set(rows.map((row) => row.name));
-}
 
 function duplicateName(name: string): ConflictError {
   return new ConflictError('ROCK_SAMPLE_DUPLICATE', `The team already has a rock sample named "${name}".`);

@@ -5,6 +5,7 @@ import type { CreateWaterAnalysisRequest, TeamSettingsValues, UpdateWaterAnalysi
 import { recordAudit } from '../audit/record-audit';
 import { assertVersion } from '../db/assert-version';
 import { ConflictError } from '../errors/app-errors';
+import { takenNames } from '../site-data/taken-names';
 import { resolveModelsOfWater } from '../mass-balance/solve-stored-model';
 import { loadTeamSettings } from '../team-settings/load-team-settings';
 import { Team } from '../teams/team.entity';
@@ -34,7 +35,7 @@ export async function addWaterAnalyses(
 ): Promise<WaterAnalysis[]> {
   const settings = input.settings ?? (await loadTeamSettings(tx, input.teamId));
   // One query for the whole batch; names added earlier in the batch join the set as they go.
-  const taken = await takenNames(tx, input.teamId, input.requests.map((request) => request.name));
+  const taken = await takenNames(tx, 'water_analyses', input.teamId, input.requests.map((request) => request.name));
   const rows = [];
   for (const request of input.requests) {
     const solutes = toStoredSolutes(request.solutes);
@@ -85,7 +86,7 @@ export async function updateWaterAnalysis(em: EntityManager, input: { id: string
     assertVersion(row.version, version);
     const teamId = row.team.id;
     const settings = await loadTeamSettings(tx, teamId);
-    if (fields.name !== undefined && fields.name !== row.name && (await takenNames(tx, teamId, [fields.name])).size > 0) throw duplicateName(fields.name);
+    if (fields.name !== undefined && fields.name !== row.name && (await takenNames(tx, 'water_analyses', teamId, [fields.name])).size > 0) throw duplicateName(fields.name);
     const nextSolutes = solutes === undefined ? row.solutes : toStoredSolutes(solutes);
     const nextPh = pH === undefined ? (row.ph === null || row.ph === undefined ? null : Number(row.ph)) : pH;
     computeWaterFigures(nextSolutes, nextPh, settings);
@@ -121,12 +122,6 @@ function sameSolutes(a: Readonly<Record<string, StoredSolute>>, b: Readonly<Reco
   return keys.length === Object.keys(b).length && keys.every((key) => b[key] !== undefined && a[key]!.value === b[key]!.value && a[key]!.unit === b[key]!.unit);
 }
 
-/** Which of these names the team's water analyses already use. */
-async function takenNames(em: EntityManager, teamId: string, names: readonly string[]): Promise<Set<string>> {
-  if (names.length === 0) return new Set();
-  const rows = await em.find(WaterAnalysis, { team: teamId, name: { $in: [...new Set(names)] } }, { fields: ['name'] });
-  return new Set(rows.map((row) => row.name));
-}
 
 function duplicateName(name: string): ConflictError {
   return new ConflictError('WATER_ANALYSIS_DUPLICATE', `The team already has a water analysis named "${name}".`);
